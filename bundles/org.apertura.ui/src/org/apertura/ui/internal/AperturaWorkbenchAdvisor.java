@@ -28,6 +28,19 @@ final class AperturaWorkbenchAdvisor extends WorkbenchAdvisor {
     }
 
     @Override
+    public void postStartup() {
+        super.postStartup();
+        // setting up the deck language takes a moment: do it before the first deck editor needs it
+        org.eclipse.core.runtime.jobs.Job warm = org.eclipse.core.runtime.jobs.Job.create("Preparing the deck language",
+                m -> {
+                    org.apertura.ui.deck.DeckLanguage.get();
+                    return org.eclipse.core.runtime.Status.OK_STATUS;
+                });
+        warm.setSystem(true);
+        warm.schedule();
+    }
+
+    @Override
     public String getInitialWindowPerspectiveId() {
         return WorkbenchIds.STUDY_PERSPECTIVE;
     }

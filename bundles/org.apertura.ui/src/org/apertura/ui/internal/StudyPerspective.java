@@ -4,12 +4,15 @@
  */
 package org.apertura.ui.internal;
 
+import org.apertura.ui.WorkbenchIds;
+import org.eclipse.ui.IFolderLayout;
 import org.eclipse.ui.IPageLayout;
 import org.eclipse.ui.IPerspectiveFactory;
 
 /**
  * The migration-study perspective: the workspace's decks, layouts and saved results on the left,
- * editors in the middle, problems and outline around them.
+ * editors in the middle, the outline on the right, and below the violations, the migration review and
+ * the problems.
  */
 public final class StudyPerspective implements IPerspectiveFactory {
 
@@ -18,6 +21,15 @@ public final class StudyPerspective implements IPerspectiveFactory {
         String editors = layout.getEditorArea();
         layout.addView(IPageLayout.ID_PROJECT_EXPLORER, IPageLayout.LEFT, 0.22f, editors);
         layout.addView(IPageLayout.ID_OUTLINE, IPageLayout.RIGHT, 0.78f, editors);
-        layout.addView(IPageLayout.ID_PROBLEM_VIEW, IPageLayout.BOTTOM, 0.72f, editors);
+        IFolderLayout bottom = layout.createFolder("org.apertura.ui.perspective.bottom", IPageLayout.BOTTOM, 0.66f,
+                editors);
+        bottom.addView(WorkbenchIds.VIOLATIONS_VIEW);
+        bottom.addView(WorkbenchIds.MIGRATION_VIEW);
+        bottom.addView(IPageLayout.ID_PROBLEM_VIEW);
+        bottom.addPlaceholder(IPageLayout.ID_PROGRESS_VIEW);
+        layout.addShowViewShortcut(WorkbenchIds.VIOLATIONS_VIEW);
+        layout.addShowViewShortcut(WorkbenchIds.MIGRATION_VIEW);
+        layout.addShowViewShortcut(IPageLayout.ID_PROBLEM_VIEW);
+        layout.addShowViewShortcut(IPageLayout.ID_PROGRESS_VIEW);
     }
 }

@@ -1,0 +1,302 @@
+/*
+ * Copyright (c) 2026 Apertura contributors.
+ * SPDX-License-Identifier: EPL-2.0
+ */
+package org.apertura.layout.bench;
+
+import java.io.BufferedOutputStream;
+import java.io.DataOutputStream;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.OutputStream;
+import java.lang.management.GarbageCollectorMXBean;
+import java.lang.management.ManagementFactory;
+import java.lang.management.MemoryMXBean;
+import java.lang.management.ThreadMXBean;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.Random;
+
+import org.apertura.layout.flatten.FlattenResult;
+import org.apertura.layout.flatten.Flattener;
+import org.apertura.layout.gds.GdsReadResult;
+import org.apertura.layout.gds.GdsReader;
+import org.apertura.layout.model.Cell;
+import org.apertura.layout.model.Library;
+
+/**
+ * Reading speed of {@link GdsReader} beside a plain sequential read of the same file in the same
+ * run, and heap used per shape. Not a test: it prints figures. Arguments: the ASAP7 library file, a
+ * scratch folder for the generated file (deleted at the end), and the size in MB of the generated
+ * file (at least 200).
+ */
+public final class LayoutReadBenchmark {
+
+    private static final int ROUNDS = 5;
+    private static volatile long sink;
+
+    private LayoutReadBenchmark() {
+    }
+
+    public static void main(String[] args) throws Exception {
+        Path asap7 = Path.of(args[0]);
+        Path scratch = Path.of(args[1]);
+        long megabytes = args.length > 2 ? Long.parseLong(args[2]) : 220;
+        System.out.printf("java %s, %d cores, max heap %d MB, load average %s%n", System.getProperty("java.version"),
+                Runtime.getRuntime().availableProcessors(), Runtime.getRuntime().maxMemory() >> 20, loadAverage());
+
+        System.out.println();
+        System.out.println("== ASAP7 library " + asap7.getFileName());
+        measure(asap7, 30, 20);
+        GdsReadResult r = GdsReader.read(asap7);
+        long t0 = System.nanoTime();
+        long polygons = 0;
+        for (int i = 0; i < 10; i++) {
+            polygons = 0;
+            for (Cell c : r.topCells()) {
+                FlattenResult f = Flattener.flatten(c);
+                polygons += f.polygonCount();
+            }
+        }
+        double ms = (System.nanoTime() - t0) / 1e6 / 10;
+        System.out.printf("flatten all %d top cells: %d polygons in %.1f ms%n", r.topCells().size(), polygons, ms);
+
+        Path generated = scratch.resolve("generated.gds");
+        try {
+            System.out.println();
+            long t = System.nanoTime();
+            long shapes = generate(generated, megabytes << 20);
+            System.out.printf("== generated layout: %.1f MB, %d shapes, written in %.1f s%n",
+                    Files.size(generated) / 1e6, shapes, (System.nanoTime() - t) / 1e9);
+            measure(generated, 1, ROUNDS);
+        } finally {
+            Files.deleteIfExists(generated);
+        }
+    }
+
+    private static void measure(Path file, int warmup, int rounds) throws IOException {
+        double mb = Files.size(file) / 1e6;
+        for (int i = 0; i < warmup; i++) {
+            sink += plainRead(file);
+            sink += GdsReader.read(file).library().getCells().size();
+        }
+        double[] plain = new double[rounds];
+        double[] reader = new double[rounds];
+        double[] readerCpu = new double[rounds];
+        double[] plainCpu = new double[rounds];
+        long gcMillis = 0;
+        ThreadMXBean threads = ManagementFactory.getThreadMXBean();
+        for (int i = 0; i < rounds; i++) {
+            long c = threads.getCurrentThreadCpuTime();
+            long t = System.nanoTime();
+            sink += plainRead(file);
+            plain[i] = mb / ((System.nanoTime() - t) / 1e9);
+            plainCpu[i] = mb / ((threads.getCurrentThreadCpuTime() - c) / 1e9);
+            long gc = gcMillis();
+            c = threads.getCurrentThreadCpuTime();
+            t = System.nanoTime();
+            GdsReadResult r = GdsReader.read(file);
+            reader[i] = mb / ((System.nanoTime() - t) / 1e9);
+            readerCpu[i] = mb / ((threads.getCurrentThreadCpuTime() - c) / 1e9);
+            gcMillis += gcMillis() - gc;
+            sink += r.library().getCells().size();
+        }
+        double p = median(plain);
+        double g = median(reader);
+        System.out.printf("plain sequential read: median %.0f MB/s (best %.0f) wall clock; %.0f MB/s per CPU second%n", p,
+                max(plain), median(plainCpu));
+        System.out.printf("GdsReader to model   : median %.0f MB/s (best %.0f) wall clock; %.0f MB/s per CPU second"
+                + " of the reading thread; GC %.0f ms per read%n", g, max(reader), median(readerCpu),
+                (double) gcMillis / rounds);
+        System.out.printf("reader / plain       : %.2f (goal >= 0.5)%n", g / p);
+        heapPerShape(file);
+    }
+
+    private static void heapPerShape(Path file) throws IOException {
+        MemoryMXBean memory = ManagementFactory.getMemoryMXBean();
+        long before = usedAfterGc(memory);
+        GdsReadResult r = GdsReader.read(file);
+        long after = usedAfterGc(memory);
+        long shapes = 0;
+        for (Cell c : r.library().getCells()) {
+            shapes += c.getElements().size();
+        }
+        Library keep = r.library();
+        System.out.printf("heap: %.1f MB for %d elements = %.0f bytes per element%n", (after - before) / 1e6, shapes,
+                (double) (after - before) / shapes);
+        sink += keep.getCells().size();
+    }
+
+    private static long gcMillis() {
+        long sum = 0;
+        for (GarbageCollectorMXBean gc : ManagementFactory.getGarbageCollectorMXBeans()) {
+            sum += Math.max(0, gc.getCollectionTime());
+        }
+        return sum;
+    }
+
+    private static long usedAfterGc(MemoryMXBean memory) {
+        for (int i = 0; i < 3; i++) {
+            System.gc();
+        }
+        return memory.getHeapMemoryUsage().getUsed();
+    }
+
+    private static long plainRead(Path file) throws IOException {
+        byte[] buf = new byte[1 << 18];
+        long x = 0;
+        try (InputStream in = Files.newInputStream(file)) {
+            int n;
+            while ((n = in.read(buf)) > 0) {
+                x += buf[n - 1];
+            }
+        }
+        return x;
+    }
+
+    private static String loadAverage() {
+        try {
+            return Files.readString(Path.of("/proc/loadavg")).strip();
+        } catch (IOException e) {
+            return "unknown";
+        }
+    }
+
+    private static double median(double[] v) {
+        double[] s = v.clone();
+        Arrays.sort(s);
+        return s[s.length / 2];
+    }
+
+    private static double max(double[] v) {
+        return Arrays.stream(v).max().orElse(0);
+    }
+
+    /**
+     * Writes a layout of at least {@code bytes} bytes: cells of 2,000 shapes each (rectangles,
+     * 8-vertex polygons, 3-point paths, labels) on a few layers, and a top cell placing every cell
+     * once and as a 4 x 4 array. Records are written directly (independent of the writer).
+     *
+     * @return number of shapes written
+     */
+    static long generate(Path file, long bytes) throws IOException {
+        Random random = new Random(7);
+        long shapes = 0;
+        int cells = 0;
+        try (OutputStream os = new BufferedOutputStream(Files.newOutputStream(file), 1 << 20);
+                DataOutputStream out = new DataOutputStream(os)) {
+            rec(out, 0x00, 2, 2);
+            out.writeShort(600);
+            rec(out, 0x01, 2, 24);
+            out.write(new byte[24]);
+            ascii(out, 0x02, "BENCH");
+            rec(out, 0x03, 5, 16);
+            out.writeLong(0x3E4189374BC6A7F0L);
+            out.writeLong(0x3944B82FA09B5A54L);
+            while (out.size() < bytes - 1_000_000) {
+                rec(out, 0x05, 2, 24);
+                out.write(new byte[24]);
+                ascii(out, 0x06, "C" + cells++);
+                for (int i = 0; i < 2000; i++) {
+                    int kind = random.nextInt(20);
+                    int x = random.nextInt(1_000_000);
+                    int y = random.nextInt(1_000_000);
+                    int layer = 1 + random.nextInt(8);
+                    if (kind < 15) {
+                        int w = 18 + random.nextInt(200);
+                        int h = 18 + random.nextInt(200);
+                        element(out, 0x08, layer);
+                        rec(out, 0x10, 3, 40);
+                        int[] xy = {x, y, x + w, y, x + w, y + h, x, y + h, x, y};
+                        for (int v : xy) {
+                            out.writeInt(v);
+                        }
+                    } else if (kind < 17) {
+                        element(out, 0x08, layer);
+                        rec(out, 0x10, 3, 72);
+                        int[] xy = {x, y, x + 100, y, x + 100, y + 50, x + 60, y + 50, x + 60, y + 120, x + 20, y + 120,
+                            x + 20, y + 50, x, y + 50, x, y};
+                        for (int v : xy) {
+                            out.writeInt(v);
+                        }
+                    } else if (kind < 19) {
+                        element(out, 0x09, layer);
+                        rec(out, 0x0F, 3, 4);
+                        out.writeInt(36);
+                        rec(out, 0x10, 3, 24);
+                        int[] xy = {x, y, x + 500, y, x + 500, y + 300};
+                        for (int v : xy) {
+                            out.writeInt(v);
+                        }
+                    } else {
+                        rec(out, 0x0C, 0, 0);
+                        rec(out, 0x0D, 2, 2);
+                        out.writeShort(layer);
+                        rec(out, 0x16, 2, 2);
+                        out.writeShort(251);
+                        rec(out, 0x10, 3, 8);
+                        out.writeInt(x);
+                        out.writeInt(y);
+                        ascii(out, 0x19, "net" + i);
+                    }
+                    rec(out, 0x11, 0, 0);
+                    shapes++;
+                }
+                rec(out, 0x07, 0, 0);
+            }
+            rec(out, 0x05, 2, 24);
+            out.write(new byte[24]);
+            ascii(out, 0x06, "TOP");
+            for (int c = 0; c < cells; c++) {
+                rec(out, 0x0A, 0, 0);
+                ascii(out, 0x12, "C" + c);
+                rec(out, 0x10, 3, 8);
+                out.writeInt(c * 1_100_000);
+                out.writeInt(0);
+                rec(out, 0x11, 0, 0);
+                rec(out, 0x0B, 0, 0);
+                ascii(out, 0x12, "C" + c);
+                rec(out, 0x13, 2, 4);
+                out.writeShort(4);
+                out.writeShort(4);
+                rec(out, 0x10, 3, 24);
+                int[] xy = {c * 1_100_000, 2_000_000, c * 1_100_000 + 4 * 1_000_000, 2_000_000, c * 1_100_000,
+                    2_000_000 + 4 * 1_000_000};
+                for (int v : xy) {
+                    out.writeInt(v);
+                }
+                rec(out, 0x11, 0, 0);
+                shapes += 2;
+            }
+            rec(out, 0x07, 0, 0);
+            rec(out, 0x04, 0, 0);
+        }
+        return shapes;
+    }
+
+    private static void element(DataOutputStream out, int type, int layer) throws IOException {
+        rec(out, type, 0, 0);
+        rec(out, 0x0D, 2, 2);
+        out.writeShort(layer);
+        rec(out, 0x0E, 2, 2);
+        out.writeShort(0);
+    }
+
+    private static void rec(DataOutputStream out, int type, int dataType, int payload) throws IOException {
+        out.writeShort(payload + 4);
+        out.writeByte(type);
+        out.writeByte(dataType);
+    }
+
+    private static void ascii(DataOutputStream out, int type, String s) throws IOException {
+        byte[] b = s.getBytes(StandardCharsets.US_ASCII);
+        int padded = b.length + (b.length & 1);
+        rec(out, type, 6, padded);
+        out.write(b);
+        if (padded > b.length) {
+            out.writeByte(0);
+        }
+    }
+}

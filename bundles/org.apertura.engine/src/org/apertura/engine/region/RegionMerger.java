@@ -1,0 +1,282 @@
+/*
+ * Copyright (c) 2026 Apertura contributors.
+ * SPDX-License-Identifier: EPL-2.0
+ */
+package org.apertura.engine.region;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collection;
+import java.util.List;
+
+import org.apertura.engine.geom.Polygon;
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.GeometryFactory;
+import org.locationtech.jts.geom.LinearRing;
+import org.locationtech.jts.geom.PrecisionModel;
+import org.locationtech.jts.operation.overlayng.UnaryUnionNG;
+
+/**
+ * Merges the polygons of one layer into {@link MergedLayer} shapes: overlapping and abutting polygons
+ * become one shape, enclosed empty areas become holes. Polygons may be given in either orientation;
+ * they must not cross themselves (the union follows the non-zero rule of each polygon's own
+ * orientation).
+ */
+public final class RegionMerger {
+
+    private RegionMerger() {
+    }
+
+    /**
+     * Merges {@code polygons}. Manhattan polygons are merged by the exact scanline; when there are
+     * non-Manhattan polygons, only they and the Manhattan shapes they touch are merged again with JTS on
+     * the database-unit grid (see the package documentation), the other shapes stay as the scanline
+     * made them.
+     */
+    public static MergedLayer merge(String name, Collection<Polygon> polygons) {
+        List<Polygon> manhattan = new ArrayList<>(polygons.size());
+        List<Polygon> other = new ArrayList<>();
+        for (Polygon p : polygons) {
+            (p.isManhattan() ? manhattan : other).add(p);
+        }
+        MergedLayer m = new ManhattanMerge(name, manhattan).run();
+        if (other.isEmpty()) {
+            return m;
+        }
+        GeometryFactory gf = new GeometryFactory(new PrecisionModel(1.0));
+        org.locationtech.jts.index.strtree.STRtree tree = new org.locationtech.jts.index.strtree.STRtree();
+        List<Geometry> mixed = new ArrayList<>();
+        for (Polygon p : other) {
+            Geometry g = toJts(gf, p);
+            tree.insert(g.getEnvelopeInternal(), g);
+            mixed.add(g);
+        }
+        boolean[] drop = new boolean[m.shapeCount()];
+        for (int s = 0; s < m.shapeCount(); s++) {
+            org.apertura.engine.geom.Box b = m.bounds(s);
+            List<?> near = tree.query(new org.locationtech.jts.geom.Envelope(b.minX(), b.maxX(), b.minY(), b.maxY()));
+            Geometry shape = null;
+            for (Object o : near) {
+                if (shape == null) {
+                    shape = shapeToJts(gf, m, s);
+                }
+                if (shape.intersects((Geometry) o)) {
+                    drop[s] = true;
+                    mixed.add(shape);
+                    break;
+                }
+            }
+        }
+        Geometry union = UnaryUnionNG.union(gf.buildGeometry(mixed), gf.getPrecisionModel());
+        List<long[]> shells = new ArrayList<>();
+        List<List<long[]>> holes = new ArrayList<>();
+        collect(union, shells, holes);
+        sortShapes(shells, holes);
+        return m.replace(drop, shells, holes);
+    }
+
+    private static Geometry shapeToJts(GeometryFactory gf, MergedLayer m, int s) {
+        List<Polygon> rings = m.rings(s);
+        org.locationtech.jts.geom.LinearRing shell = ((org.locationtech.jts.geom.Polygon) toJts(gf, rings.get(0))).getExteriorRing();
+        org.locationtech.jts.geom.LinearRing[] hs = new org.locationtech.jts.geom.LinearRing[rings.size() - 1];
+        for (int i = 1; i < rings.size(); i++) {
+            hs[i - 1] = ((org.locationtech.jts.geom.Polygon) toJts(gf, rings.get(i))).getExteriorRing();
+        }
+        return gf.createPolygon(shell, hs);
+    }
+
+    /** Merges with JTS on the integer grid whatever the edge angles. */
+    public static MergedLayer mergeWithJts(String name, Collection<Polygon> polygons) {
+        GeometryFactory gf = new GeometryFactory(new PrecisionModel(1.0));
+        List<Geometry> geoms = new ArrayList<>(polygons.size());
+        for (Polygon p : polygons) {
+            geoms.add(toJts(gf, p));
+        }
+        Geometry union = UnaryUnionNG.union(gf.buildGeometry(geoms), gf.getPrecisionModel());
+        List<long[]> shells = new ArrayList<>();
+        List<List<long[]>> holes = new ArrayList<>();
+        collect(union, shells, holes);
+        return fromRings(name, shells, holes);
+    }
+
+    private static void collect(Geometry union, List<long[]> shells, List<List<long[]>> holes) {
+        for (int i = 0; i < union.getNumGeometries(); i++) {
+            Geometry g = union.getGeometryN(i);
+            if (!(g instanceof org.locationtech.jts.geom.Polygon jp) || jp.isEmpty()) {
+                continue;
+            }
+            long[] shell = ringCoords(jp.getExteriorRing().getCoordinates(), true);
+            if (shell == null) {
+                continue;
+            }
+            List<long[]> hs = new ArrayList<>();
+            for (int h = 0; h < jp.getNumInteriorRing(); h++) {
+                long[] hole = ringCoords(jp.getInteriorRingN(h).getCoordinates(), false);
+                if (hole != null) {
+                    hs.add(hole);
+                }
+            }
+            shells.add(shell);
+            holes.add(hs);
+        }
+    }
+
+    /** Sorts shapes by the lowest-leftmost vertex of their shell (a deterministic order). */
+    private static void sortShapes(List<long[]> shells, List<List<long[]>> holes) {
+        int n = shells.size();
+        long[][] keys = new long[n][];
+        Integer[] order = new Integer[n];
+        for (int i = 0; i < n; i++) {
+            keys[i] = minVertex(shells.get(i));
+            order[i] = i;
+        }
+        Arrays.sort(order, (a, b) -> keys[a][0] != keys[b][0] ? Long.compare(keys[a][0], keys[b][0])
+                : Long.compare(keys[a][1], keys[b][1]));
+        List<long[]> s2 = new ArrayList<>(n);
+        List<List<long[]>> h2 = new ArrayList<>(n);
+        for (int i : order) {
+            s2.add(shells.get(i));
+            h2.add(holes.get(i));
+        }
+        shells.clear();
+        shells.addAll(s2);
+        holes.clear();
+        holes.addAll(h2);
+    }
+
+    /** Builds a layer from shells (counter-clockwise) and their holes (clockwise). */
+    private static MergedLayer fromRings(String name, List<long[]> shells, List<List<long[]>> holes) {
+        sortShapes(shells, holes);
+        Integer[] order = new Integer[shells.size()];
+        for (int i = 0; i < order.length; i++) {
+            order[i] = i;
+        }
+        int edges = 0;
+        int rings = 0;
+        for (int i = 0; i < shells.size(); i++) {
+            edges += shells.get(i).length / 2;
+            rings++;
+            for (long[] h : holes.get(i)) {
+                edges += h.length / 2;
+                rings++;
+            }
+        }
+        long[] xy = new long[4 * edges];
+        int[] ringStart = new int[rings + 1];
+        int[] ringShape = new int[rings];
+        boolean manhattan = true;
+        int e = 0, r = 0;
+        for (int s = 0; s < order.length; s++) {
+            List<long[]> all = new ArrayList<>();
+            all.add(shells.get(order[s]));
+            all.addAll(holes.get(order[s]));
+            for (long[] ring : all) {
+                ringStart[r] = e;
+                ringShape[r] = s;
+                int n = ring.length / 2;
+                for (int k = 0; k < n; k++) {
+                    int k1 = (k + 1) % n;
+                    xy[4 * e] = ring[2 * k];
+                    xy[4 * e + 1] = ring[2 * k + 1];
+                    xy[4 * e + 2] = ring[2 * k1];
+                    xy[4 * e + 3] = ring[2 * k1 + 1];
+                    if (xy[4 * e] != xy[4 * e + 2] && xy[4 * e + 1] != xy[4 * e + 3]) {
+                        manhattan = false;
+                    }
+                    e++;
+                }
+                r++;
+            }
+        }
+        ringStart[rings] = e;
+        return new MergedLayer(name, xy, ringStart, ringShape, order.length, manhattan);
+    }
+
+    private static long[] minVertex(long[] r) {
+        long bx = Long.MAX_VALUE, by = Long.MAX_VALUE;
+        for (int i = 0; i < r.length; i += 2) {
+            if (r[i] < bx || r[i] == bx && r[i + 1] < by) {
+                bx = r[i];
+                by = r[i + 1];
+            }
+        }
+        return new long[] {bx, by};
+    }
+
+    /** JTS polygon (shell only) on the fixed grid for one of our polygons. */
+    public static Geometry toJts(GeometryFactory gf, Polygon p) {
+        int n = p.size();
+        Coordinate[] cs = new Coordinate[n + 1];
+        for (int i = 0; i < n; i++) {
+            cs[i] = new Coordinate(p.x(i), p.y(i));
+        }
+        cs[n] = cs[0];
+        LinearRing ring = gf.createLinearRing(cs);
+        return gf.createPolygon(ring);
+    }
+
+    /**
+     * Ring coordinates without closing point, duplicate or collinear vertices, oriented
+     * counter-clockwise for shells and clockwise for holes; null when degenerate.
+     */
+    static long[] ringCoords(Coordinate[] cs, boolean shell) {
+        int n = cs.length - 1;
+        long[] c = new long[2 * n];
+        for (int i = 0; i < n; i++) {
+            c[2 * i] = Math.round(cs[i].x);
+            c[2 * i + 1] = Math.round(cs[i].y);
+        }
+        c = simplify(c);
+        if (c == null) {
+            return null;
+        }
+        long a2 = 0;
+        int m = c.length / 2;
+        for (int i = 0; i < m; i++) {
+            int j = (i + 1) % m;
+            a2 += c[2 * i] * c[2 * j + 1] - c[2 * j] * c[2 * i + 1];
+        }
+        if (a2 == 0) {
+            return null;
+        }
+        if ((a2 > 0) != shell) {
+            long[] rev = new long[c.length];
+            for (int i = 0; i < m; i++) {
+                rev[2 * i] = c[2 * (m - 1 - i)];
+                rev[2 * i + 1] = c[2 * (m - 1 - i) + 1];
+            }
+            c = rev;
+        }
+        return c;
+    }
+
+    /** Drops repeated and collinear vertices; null when fewer than three remain. */
+    static long[] simplify(long[] c) {
+        int n = c.length / 2;
+        boolean changed = true;
+        long[] cur = c;
+        while (changed && n >= 3) {
+            changed = false;
+            long[] out = new long[2 * n];
+            int m = 0;
+            for (int i = 0; i < n; i++) {
+                int p = (i + n - 1) % n, q = (i + 1) % n;
+                long ax = cur[2 * i] - cur[2 * p], ay = cur[2 * i + 1] - cur[2 * p + 1];
+                long bx = cur[2 * q] - cur[2 * i], by = cur[2 * q + 1] - cur[2 * i + 1];
+                boolean dup = ax == 0 && ay == 0;
+                boolean collinear = ax * by - ay * bx == 0;
+                if (dup || collinear) {
+                    changed = true;
+                    continue;
+                }
+                out[2 * m] = cur[2 * i];
+                out[2 * m + 1] = cur[2 * i + 1];
+                m++;
+            }
+            cur = Arrays.copyOf(out, 2 * m);
+            n = m;
+        }
+        return n >= 3 ? cur : null;
+    }
+}

@@ -1,0 +1,86 @@
+/*
+ * Copyright (c) 2026 Apertura contributors.
+ * SPDX-License-Identifier: EPL-2.0
+ */
+package org.apertura.migrate;
+
+import java.util.Objects;
+import java.util.Optional;
+import java.util.OptionalDouble;
+import java.util.Set;
+
+import org.apertura.engine.check.CheckOptions;
+import org.apertura.migrate.shrink.ShrinkHeadroom;
+
+/**
+ * Settings of a migration study.
+ *
+ * @param engine          how the check engine runs (threads, progress, cancellation)
+ * @param shrinkProbe     probe factor of the shrink measurement: places are measured down to
+ *                        {@code 1/shrinkProbe} of their size (at least 2)
+ * @param perAxisShrink   also measure the shrink per axis; it is always measured when the target
+ *                        option is anamorphic
+ * @param dieWidthMm      a declared die width; the top cell's extent when empty
+ * @param dieHeightMm     a declared die height; the top cell's extent when empty
+ * @param stitchKeepOutNm the keep-out band on each side of a stitching line, in nm (the deck language
+ *                        has no such value, so it is given here)
+ * @param criticalLayers  layers whose shapes must not meet a stitching line; the moved layers when empty
+ * @param topCell         the cell to analyse; the file's only top cell when empty
+ */
+public record MigrationOptions(CheckOptions engine, int shrinkProbe, boolean perAxisShrink, OptionalDouble dieWidthMm,
+        OptionalDouble dieHeightMm, double stitchKeepOutNm, Set<String> criticalLayers, Optional<String> topCell) {
+
+    /** Checks the settings. */
+    public MigrationOptions {
+        Objects.requireNonNull(engine, "engine");
+        if (shrinkProbe < 2) {
+            throw new IllegalArgumentException("shrink probe must be at least 2, got " + shrinkProbe);
+        }
+        Objects.requireNonNull(dieWidthMm, "dieWidthMm");
+        Objects.requireNonNull(dieHeightMm, "dieHeightMm");
+        if (dieWidthMm.isPresent() != dieHeightMm.isPresent()) {
+            throw new IllegalArgumentException("declare both die width and height, or neither");
+        }
+        if (!(stitchKeepOutNm >= 0)) {
+            throw new IllegalArgumentException("stitch keep-out must not be negative, got " + stitchKeepOutNm);
+        }
+        criticalLayers = Set.copyOf(criticalLayers);
+        Objects.requireNonNull(topCell, "topCell");
+    }
+
+    /** All processors, probe {@value ShrinkHeadroom#DEFAULT_PROBE}, uniform shrink, die from the layout, 1 µm keep-out. */
+    public static MigrationOptions defaults() {
+        return new MigrationOptions(CheckOptions.defaults(), ShrinkHeadroom.DEFAULT_PROBE, false, OptionalDouble.empty(),
+                OptionalDouble.empty(), 1000, Set.of(), Optional.empty());
+    }
+
+    /** A copy with a declared die size in mm. */
+    public MigrationOptions withDie(double widthMm, double heightMm) {
+        return new MigrationOptions(engine, shrinkProbe, perAxisShrink, OptionalDouble.of(widthMm),
+                OptionalDouble.of(heightMm), stitchKeepOutNm, criticalLayers, topCell);
+    }
+
+    /** A copy with the given engine settings. */
+    public MigrationOptions withEngine(CheckOptions e) {
+        return new MigrationOptions(e, shrinkProbe, perAxisShrink, dieWidthMm, dieHeightMm, stitchKeepOutNm,
+                criticalLayers, topCell);
+    }
+
+    /** A copy with the given keep-out band in nm. */
+    public MigrationOptions withStitchKeepOut(double nm) {
+        return new MigrationOptions(engine, shrinkProbe, perAxisShrink, dieWidthMm, dieHeightMm, nm, criticalLayers,
+                topCell);
+    }
+
+    /** A copy that measures the shrink per axis as well. */
+    public MigrationOptions withPerAxisShrink(boolean on) {
+        return new MigrationOptions(engine, shrinkProbe, on, dieWidthMm, dieHeightMm, stitchKeepOutNm, criticalLayers,
+                topCell);
+    }
+
+    /** A copy analysing the named cell. */
+    public MigrationOptions withTopCell(String cell) {
+        return new MigrationOptions(engine, shrinkProbe, perAxisShrink, dieWidthMm, dieHeightMm, stitchKeepOutNm,
+                criticalLayers, Optional.of(cell));
+    }
+}

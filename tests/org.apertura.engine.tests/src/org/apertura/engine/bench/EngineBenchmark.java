@@ -1,0 +1,198 @@
+/*
+ * Copyright (c) 2026 Apertura contributors.
+ * SPDX-License-Identifier: EPL-2.0
+ */
+package org.apertura.engine.bench;
+
+import java.lang.management.ManagementFactory;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Map;
+
+import org.apertura.engine.check.CheckEngine;
+import org.apertura.engine.check.CheckOptions;
+import org.apertura.engine.check.Violation;
+import org.apertura.engine.geom.Polygon;
+import org.apertura.engine.internal.EdgeIndex;
+import org.apertura.engine.region.MergedLayer;
+import org.apertura.engine.rule.Rule;
+import org.apertura.engine.rule.SpacingRule;
+import org.apertura.engine.rule.WidthRule;
+import org.locationtech.jts.geom.Coordinate;
+import org.locationtech.jts.geom.Envelope;
+import org.locationtech.jts.geom.Geometry;
+import org.locationtech.jts.geom.GeometryFactory;
+import org.locationtech.jts.index.strtree.STRtree;
+import org.locationtech.jts.operation.union.UnaryUnionOp;
+
+/**
+ * Prints, per layout size: the engine's time (merge + width + spacing on m1 and m2), the time of a
+ * straightforward JTS checker (union, STRtree, distance: spacing only) while it stays within a few
+ * minutes, the engine's spacing-only time for a like-for-like ratio, the time to sort the same edges
+ * (the floor), and heap bytes per edge. Arguments: sizes (default 10000 100000 1000000), "--threads N",
+ * "--jts-limit SECONDS" (default 180): the JTS checker runs on the first size when it is at most 100k
+ * rectangles, and on each further size while its time extrapolated from the previous one (linear,
+ * +30 %) stays below the limit.
+ */
+public final class EngineBenchmark {
+
+    private static final long SPACING = 50, WIDTH = 50;
+
+    public static void main(String[] args) {
+        List<Integer> sizes = new ArrayList<>();
+        int threads = Runtime.getRuntime().availableProcessors();
+        double jtsLimit = 180;
+        for (int i = 0; i < args.length; i++) {
+            switch (args[i]) {
+                case "--threads" -> threads = Integer.parseInt(args[++i]);
+                case "--jts-limit" -> jtsLimit = Double.parseDouble(args[++i]);
+                default -> sizes.add(Integer.parseInt(args[i].replace("_", "")));
+            }
+        }
+        if (sizes.isEmpty()) {
+            sizes.addAll(List.of(10_000, 100_000, 1_000_000));
+        }
+        System.out.printf("apertura engine benchmark: %d threads, JDK %s, max heap %d MiB%n", threads,
+                System.getProperty("java.version"), Runtime.getRuntime().maxMemory() >> 20);
+        System.out.printf("%10s %9s %9s %9s %9s %9s %9s %8s %8s %7s %7s%n", "rects", "edges", "engine_s", "eng_sp_s",
+                "jts_sp_s", "sort_s", "vs_jts", "vs_sort", "B/edge", "viol", "scale");
+        double lastJts = 0, lastEngine = 0;
+        int lastSize = 0;
+        CheckEngine engine = new CheckEngine(CheckOptions.threads(threads));
+        // warm-up so the first size is not all JIT
+        run(engine, RoutingGenerator.generate(1, 20_000), List.of(rules("m1")));
+        for (int n : sizes) {
+            Map<String, List<Polygon>> layout = RoutingGenerator.generate(42, n);
+            Map<String, List<Polygon>> metal = Map.of("m1", layout.get("m1"), "m2", layout.get("m2"));
+            long edges = 0;
+            for (List<Polygon> l : metal.values()) {
+                for (Polygon p : l) {
+                    edges += p.size();
+                }
+            }
+            // engine: merge + width + spacing
+            System.gc();
+            long before = usedHeap();
+            long t0 = System.nanoTime();
+            Map<String, MergedLayer> merged = engine.merge(metal);
+            List<Rule> rules = new ArrayList<>();
+            rules.addAll(rules("m1"));
+            rules.addAll(rules("m2"));
+            List<Violation> v = engine.checkMerged(merged, rules);
+            double engineS = (System.nanoTime() - t0) / 1e9;
+            long mergedEdges = 0, bytes = 0;
+            for (MergedLayer m : merged.values()) {
+                mergedEdges += m.edgeCount();
+                bytes += m.retainedBytes() + new EdgeIndex(m).retainedBytes();
+            }
+            System.gc();
+            long after = usedHeap();
+            // engine spacing only (merge included) for the like-for-like ratio
+            long t1 = System.nanoTime();
+            Map<String, MergedLayer> merged2 = engine.merge(metal);
+            engine.checkMerged(merged2, List.of(new SpacingRule("S1", "m1", SPACING), new SpacingRule("S2", "m2", SPACING)));
+            double engineSp = (System.nanoTime() - t1) / 1e9;
+            merged2 = null;
+            // floor: sort the input edges (one long key per edge)
+            double sortS = sortEdges(metal);
+            // JTS checker while it is expected to finish within the limit
+            double jtsS = Double.NaN;
+            boolean firstSmall = lastJts == 0 && n <= 100_000;
+            if (firstSmall || lastJts > 0 && lastJts * ((double) n / lastSize) * 1.3 < jtsLimit) {
+                jtsS = jtsSpacing(metal);
+                lastJts = jtsS;
+            } else {
+                lastJts = Double.POSITIVE_INFINITY;
+            }
+            double scale = lastEngine > 0 ? engineS / lastEngine : Double.NaN;
+            System.out.printf("%10d %9d %9.3f %9.3f %9s %9.3f %9s %8.2f %8.1f %7d %7s%n", n, edges, engineS, engineSp,
+                    Double.isNaN(jtsS) ? "skipped" : String.format("%.3f", jtsS), sortS,
+                    Double.isNaN(jtsS) ? "-" : String.format("%.1fx", jtsS / engineSp), engineS / sortS,
+                    (double) bytes / mergedEdges, v.size(), Double.isNaN(scale) ? "-" : String.format("%.2fx", scale));
+            System.out.printf("%10s merged edges %d; heap growth after merge+check (GC'd, incl. results) %.1f B/edge%n", "",
+                    mergedEdges, (double) (after - before) / mergedEdges);
+            lastEngine = engineS;
+            lastSize = n;
+        }
+        System.out.println("engine_s: merge + width + spacing (Euclidean) on m1, m2; eng_sp_s: merge + spacing only;");
+        System.out.println("jts_sp_s: JTS union + STRtree + distance spacing on the same layers; vs_jts = jts_sp_s / eng_sp_s;");
+        System.out.println("sort_s: Arrays.sort of one long key per input edge; vs_sort = engine_s / sort_s;");
+        System.out.println("B/edge: engine arrays (merged layer + edge index) per merged edge; scale: engine_s / previous size.");
+    }
+
+    private static List<Rule> rules(String layer) {
+        return List.of(new WidthRule("W." + layer, layer, WIDTH), new SpacingRule("S." + layer, layer, SPACING));
+    }
+
+    private static void run(CheckEngine engine, Map<String, List<Polygon>> layout, List<List<Rule>> rules) {
+        Map<String, MergedLayer> merged = engine.merge(Map.of("m1", layout.get("m1")));
+        engine.checkMerged(merged, rules.get(0));
+    }
+
+    private static long usedHeap() {
+        return ManagementFactory.getMemoryMXBean().getHeapMemoryUsage().getUsed();
+    }
+
+    private static double sortEdges(Map<String, List<Polygon>> layers) {
+        int n = 0;
+        for (List<Polygon> l : layers.values()) {
+            for (Polygon p : l) {
+                n += p.size();
+            }
+        }
+        long[] keys = new long[n];
+        int k = 0;
+        for (List<Polygon> l : layers.values()) {
+            for (Polygon p : l) {
+                for (int i = 0; i < p.size(); i++) {
+                    keys[k] = (p.x(i) << 20) ^ p.y(i) ^ k;
+                    k++;
+                }
+            }
+        }
+        long t0 = System.nanoTime();
+        Arrays.sort(keys);
+        return (System.nanoTime() - t0) / 1e9;
+    }
+
+    /** Union each layer, index the shapes in an STRtree, report pairs closer than the spacing. */
+    private static double jtsSpacing(Map<String, List<Polygon>> layers) {
+        long t0 = System.nanoTime();
+        GeometryFactory gf = new GeometryFactory();
+        long pairs = 0;
+        for (List<Polygon> l : layers.values()) {
+            List<Geometry> gs = new ArrayList<>(l.size());
+            for (Polygon p : l) {
+                Coordinate[] cs = new Coordinate[p.size() + 1];
+                for (int i = 0; i < p.size(); i++) {
+                    cs[i] = new Coordinate(p.x(i), p.y(i));
+                }
+                cs[p.size()] = cs[0];
+                gs.add(gf.createPolygon(cs));
+            }
+            Geometry u = UnaryUnionOp.union(gs);
+            STRtree tree = new STRtree();
+            List<Geometry> shapes = new ArrayList<>();
+            for (int i = 0; i < u.getNumGeometries(); i++) {
+                Geometry g = u.getGeometryN(i);
+                shapes.add(g);
+                tree.insert(g.getEnvelopeInternal(), i);
+            }
+            for (int i = 0; i < shapes.size(); i++) {
+                Envelope env = new Envelope(shapes.get(i).getEnvelopeInternal());
+                env.expandBy(SPACING);
+                for (Object o : tree.query(env)) {
+                    int j = (Integer) o;
+                    if (j > i && shapes.get(i).distance(shapes.get(j)) < SPACING) {
+                        pairs++;
+                    }
+                }
+            }
+        }
+        if (pairs < 0) {
+            throw new IllegalStateException();
+        }
+        return (System.nanoTime() - t0) / 1e9;
+    }
+}
