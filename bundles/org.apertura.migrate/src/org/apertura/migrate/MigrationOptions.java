@@ -16,19 +16,22 @@ import org.apertura.migrate.shrink.ShrinkHeadroom;
  * Settings of a migration study.
  *
  * @param engine          how the check engine runs (threads, progress, cancellation)
- * @param shrinkProbe     probe factor of the shrink measurement: places are measured down to
- *                        {@code 1/shrinkProbe} of their size (at least 2)
+ * @param shrinkProbe     probe factor of the shrink measurement where measure mode does not apply
+ *                        (per-axis figures, end-of-line, enclosure, spacing tables, mask side): places
+ *                        are measured down to {@code 1/shrinkProbe} of their size (at least 2); the
+ *                        uniform width, spacing, pitch and area headroom has no such floor
  * @param perAxisShrink   also measure the shrink per axis; it is always measured when the target
  *                        option is anamorphic
  * @param dieWidthMm      a declared die width; the top cell's extent when empty
  * @param dieHeightMm     a declared die height; the top cell's extent when empty
- * @param stitchKeepOutNm the keep-out band on each side of a stitching line, in nm (the deck language
- *                        has no such value, so it is given here)
+ * @param stitchKeepOutNm an explicit override of the keep-out band on each side of a stitching line, in
+ *                        nm, applied to both options; empty (the default) to take each option's
+ *                        {@code stitch keep-out} from the deck (no band when the deck gives none)
  * @param criticalLayers  layers whose shapes must not meet a stitching line; the moved layers when empty
  * @param topCell         the cell to analyse; the file's only top cell when empty
  */
 public record MigrationOptions(CheckOptions engine, int shrinkProbe, boolean perAxisShrink, OptionalDouble dieWidthMm,
-        OptionalDouble dieHeightMm, double stitchKeepOutNm, Set<String> criticalLayers, Optional<String> topCell) {
+        OptionalDouble dieHeightMm, OptionalDouble stitchKeepOutNm, Set<String> criticalLayers, Optional<String> topCell) {
 
     /** Checks the settings. */
     public MigrationOptions {
@@ -41,17 +44,22 @@ public record MigrationOptions(CheckOptions engine, int shrinkProbe, boolean per
         if (dieWidthMm.isPresent() != dieHeightMm.isPresent()) {
             throw new IllegalArgumentException("declare both die width and height, or neither");
         }
-        if (!(stitchKeepOutNm >= 0)) {
-            throw new IllegalArgumentException("stitch keep-out must not be negative, got " + stitchKeepOutNm);
+        Objects.requireNonNull(stitchKeepOutNm, "stitchKeepOutNm");
+        if (stitchKeepOutNm.isPresent() && !(stitchKeepOutNm.getAsDouble() >= 0)) {
+            throw new IllegalArgumentException(
+                    "stitch keep-out must not be negative, got " + stitchKeepOutNm.getAsDouble());
         }
         criticalLayers = Set.copyOf(criticalLayers);
         Objects.requireNonNull(topCell, "topCell");
     }
 
-    /** All processors, probe {@value ShrinkHeadroom#DEFAULT_PROBE}, uniform shrink, die from the layout, 1 µm keep-out. */
+    /**
+     * All processors, probe {@value ShrinkHeadroom#DEFAULT_PROBE}, uniform shrink, die from the layout,
+     * keep-out band from the deck.
+     */
     public static MigrationOptions defaults() {
         return new MigrationOptions(CheckOptions.defaults(), ShrinkHeadroom.DEFAULT_PROBE, false, OptionalDouble.empty(),
-                OptionalDouble.empty(), 1000, Set.of(), Optional.empty());
+                OptionalDouble.empty(), OptionalDouble.empty(), Set.of(), Optional.empty());
     }
 
     /** A copy with a declared die size in mm. */
@@ -66,10 +74,20 @@ public record MigrationOptions(CheckOptions engine, int shrinkProbe, boolean per
                 criticalLayers, topCell);
     }
 
-    /** A copy with the given keep-out band in nm. */
+    /**
+     * A copy whose keep-out band, in nm, overrides the decks' {@code stitch keep-out} for every option.
+     *
+     * @throws IllegalArgumentException for a negative band
+     */
     public MigrationOptions withStitchKeepOut(double nm) {
-        return new MigrationOptions(engine, shrinkProbe, perAxisShrink, dieWidthMm, dieHeightMm, nm, criticalLayers,
-                topCell);
+        return new MigrationOptions(engine, shrinkProbe, perAxisShrink, dieWidthMm, dieHeightMm,
+                OptionalDouble.of(nm), criticalLayers, topCell);
+    }
+
+    /** A copy that takes the keep-out band of each option from the deck (no override). */
+    public MigrationOptions withDeckStitchKeepOut() {
+        return new MigrationOptions(engine, shrinkProbe, perAxisShrink, dieWidthMm, dieHeightMm,
+                OptionalDouble.empty(), criticalLayers, topCell);
     }
 
     /** A copy that measures the shrink per axis as well. */

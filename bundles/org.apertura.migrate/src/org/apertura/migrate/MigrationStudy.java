@@ -61,6 +61,7 @@ public final class MigrationStudy {
 
     /**
      * Runs the study on polygons given in memory (database units of the deck, keyed by deck layer).
+     * The result's lists are in the fixed order of {@link MigrationResult#sorted()}.
      *
      * @param extent the top cell's extent (for the field check when no die size is declared); may be
      *               null for an empty layout
@@ -114,7 +115,8 @@ public final class MigrationStudy {
                 DeckDelta.compare(deck, fromOption, toOption, moved), impact, headroom,
                 MaskBudget.of(deck, fromOption, toOption, moved),
                 PatterningConflicts.analyse(deck, fromOption, toOption, moved, merged, engine),
-                MaskSideCheck.check(deck, toOption, moved, merged, engine, opts.shrinkProbe()), fields, warnings);
+                MaskSideCheck.check(deck, toOption, moved, merged, engine, opts.shrinkProbe()), fields, warnings)
+                .sorted();
     }
 
     /** Layers, in deck order, whose patterning or rules differ between the two options. */

@@ -8,6 +8,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
+import java.util.stream.Collectors;
 
 import org.apertura.migrate.delta.DeltaStatus;
 import org.apertura.migrate.impact.ImpactCount;
@@ -132,10 +133,14 @@ public final class SummaryTable {
         if (h.bounded()) {
             return String.format(Locale.ROOT, ">= %.0f %%", 100 * h.headroom());
         }
+        // Several rules may bind at the same factor: name them all, in a fixed order.
         String limit = r.headroom().stream()
                 .filter(x -> x.layer().equals(layer) && !x.rule().equals("*") && x.scope() == ShrinkScope.UNIFORM
                         && !x.bounded() && x.factor() == h.factor())
-                .map(Headroom::rule).findFirst().orElse("?");
+                .map(Headroom::rule).distinct().sorted().collect(Collectors.joining(", "));
+        if (limit.isEmpty()) {
+            limit = "?";
+        }
         return String.format(Locale.ROOT, "%.1f %% (%s)", 100 * h.headroom(), limit);
     }
 }

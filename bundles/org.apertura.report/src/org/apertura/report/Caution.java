@@ -4,12 +4,13 @@
  */
 package org.apertura.report;
 
+import org.apertura.migrate.MigrationResult;
+
 /** The caution every report, summary and help text carries. */
 public final class Caution {
 
-    /** One sentence, plain text. */
-    public static final String TEXT = "Apertura is an engineering aid, not a sign-off tool: confirm every result "
-            + "with the foundry's qualified rule decks and the fab's licensed practice.";
+    /** One sentence, plain text; the same words the migration study saves with its results. */
+    public static final String TEXT = MigrationResult.CAUTION;
 
     private Caution() {
     }

@@ -22,6 +22,9 @@ public final class WorkbenchIds {
     /** The deck editor ({@code .apdeck} files). */
     public static final String DECK_EDITOR = "org.apertura.ui.editor.deck";
 
+    /** The launcher that opens saved studies ({@code .apstudy} files) in the migration view. */
+    public static final String SAVED_STUDY_EDITOR = "org.apertura.ui.editor.savedStudy";
+
     /** Title of every Apertura workbench window. */
     public static final String WINDOW_TITLE = "Apertura";
 

@@ -13,9 +13,12 @@ import java.lang.management.GarbageCollectorMXBean;
 import java.lang.management.ManagementFactory;
 import java.lang.management.MemoryMXBean;
 import java.lang.management.ThreadMXBean;
+import java.nio.ByteBuffer;
+import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
 import java.util.Arrays;
 import java.util.Random;
 
@@ -25,16 +28,23 @@ import org.apertura.layout.gds.GdsReadResult;
 import org.apertura.layout.gds.GdsReader;
 import org.apertura.layout.model.Cell;
 import org.apertura.layout.model.Library;
+import org.apertura.layout.stream.GdsStreamReader;
+import org.apertura.layout.stream.StreamCell;
+import org.apertura.layout.stream.StreamFlattener;
+import org.apertura.layout.stream.StreamLayout;
 
 /**
- * Reading speed of {@link GdsReader} beside a plain sequential read of the same file in the same
- * run, and heap used per shape. Not a test: it prints figures. Arguments: the ASAP7 library file, a
- * scratch folder for the generated file (deleted at the end), and the size in MB of the generated
- * file (at least 200).
+ * Reading speed of the streaming reader {@link GdsStreamReader} and of the EMF reader
+ * {@link GdsReader}, each beside a plain sequential read of the same file (an InputStream read into
+ * a 256 KiB buffer) measured in the same run, rounds interleaved so machine load hits all three alike;
+ * and heap used per element by each result. Not a test: it prints figures. Arguments: the ASAP7
+ * library file, a scratch folder for the generated file (deleted at the end), and the size in MB of
+ * the generated file (at least 200).
  */
 public final class LayoutReadBenchmark {
 
-    private static final int ROUNDS = 5;
+    private static final int ROUNDS = 7;
+    private static final int EMF_ROUNDS = 3;
     private static volatile long sink;
 
     private LayoutReadBenchmark() {
@@ -49,44 +59,73 @@ public final class LayoutReadBenchmark {
 
         System.out.println();
         System.out.println("== ASAP7 library " + asap7.getFileName());
-        measure(asap7, 30, 20);
-        GdsReadResult r = GdsReader.read(asap7);
-        long t0 = System.nanoTime();
-        long polygons = 0;
-        for (int i = 0; i < 10; i++) {
-            polygons = 0;
-            for (Cell c : r.topCells()) {
-                FlattenResult f = Flattener.flatten(c);
-                polygons += f.polygonCount();
-            }
-        }
-        double ms = (System.nanoTime() - t0) / 1e6 / 10;
-        System.out.printf("flatten all %d top cells: %d polygons in %.1f ms%n", r.topCells().size(), polygons, ms);
+        measure(asap7, 30, 21, 21);
+        flattenAll(asap7);
 
         Path generated = scratch.resolve("generated.gds");
         try {
             System.out.println();
             long t = System.nanoTime();
             long shapes = generate(generated, megabytes << 20);
-            System.out.printf("== generated layout: %.1f MB, %d shapes, written in %.1f s%n",
+            System.out.printf("== generated layout: %.1f MB, %d elements, written in %.1f s%n",
                     Files.size(generated) / 1e6, shapes, (System.nanoTime() - t) / 1e9);
-            measure(generated, 1, ROUNDS);
+            measure(generated, 1, ROUNDS, EMF_ROUNDS);
         } finally {
             Files.deleteIfExists(generated);
         }
+        System.out.printf("load average at the end %s%n", loadAverage());
     }
 
-    private static void measure(Path file, int warmup, int rounds) throws IOException {
+    /** Flattens every top cell with both paths; the polygon counts must agree. */
+    private static void flattenAll(Path file) throws IOException {
+        GdsReadResult r = GdsReader.read(file);
+        StreamLayout s = GdsStreamReader.read(file);
+        long emfPolygons = 0;
+        long streamPolygons = 0;
+        long t0 = System.nanoTime();
+        for (int i = 0; i < 10; i++) {
+            emfPolygons = 0;
+            for (Cell c : r.topCells()) {
+                FlattenResult f = Flattener.flatten(c);
+                emfPolygons += f.polygonCount();
+            }
+        }
+        double emfMs = (System.nanoTime() - t0) / 1e6 / 10;
+        t0 = System.nanoTime();
+        for (int i = 0; i < 10; i++) {
+            streamPolygons = 0;
+            for (StreamCell c : s.topCells()) {
+                FlattenResult f = StreamFlattener.flatten(s, c);
+                streamPolygons += f.polygonCount();
+            }
+        }
+        double streamMs = (System.nanoTime() - t0) / 1e6 / 10;
+        System.out.printf("flatten all %d top cells: EMF path %d polygons in %.1f ms, streaming path %d polygons in %.1f ms%n",
+                r.topCells().size(), emfPolygons, emfMs, streamPolygons, streamMs);
+        if (emfPolygons != streamPolygons) {
+            throw new IllegalStateException("the two paths disagree");
+        }
+    }
+
+    private static void measure(Path file, int warmup, int rounds, int emfRounds) throws IOException {
         double mb = Files.size(file) / 1e6;
         for (int i = 0; i < warmup; i++) {
             sink += plainRead(file);
+            sink += recordWalk(file);
+            sink += GdsStreamReader.read(file).cells().size();
             sink += GdsReader.read(file).library().getCells().size();
         }
         double[] plain = new double[rounds];
-        double[] reader = new double[rounds];
-        double[] readerCpu = new double[rounds];
         double[] plainCpu = new double[rounds];
-        long gcMillis = 0;
+        double[] walk = new double[rounds];
+        double[] stream = new double[rounds];
+        double[] streamCpu = new double[rounds];
+        double[] streamRatio = new double[rounds];
+        double[] emf = new double[emfRounds];
+        double[] emfCpu = new double[emfRounds];
+        double[] emfRatio = new double[emfRounds];
+        long streamGc = 0;
+        long emfGc = 0;
         ThreadMXBean threads = ManagementFactory.getThreadMXBean();
         for (int i = 0; i < rounds; i++) {
             long c = threads.getCurrentThreadCpuTime();
@@ -94,38 +133,74 @@ public final class LayoutReadBenchmark {
             sink += plainRead(file);
             plain[i] = mb / ((System.nanoTime() - t) / 1e9);
             plainCpu[i] = mb / ((threads.getCurrentThreadCpuTime() - c) / 1e9);
+
+            t = System.nanoTime();
+            sink += recordWalk(file);
+            walk[i] = mb / ((System.nanoTime() - t) / 1e9);
+
             long gc = gcMillis();
             c = threads.getCurrentThreadCpuTime();
             t = System.nanoTime();
-            GdsReadResult r = GdsReader.read(file);
-            reader[i] = mb / ((System.nanoTime() - t) / 1e9);
-            readerCpu[i] = mb / ((threads.getCurrentThreadCpuTime() - c) / 1e9);
-            gcMillis += gcMillis() - gc;
-            sink += r.library().getCells().size();
+            StreamLayout s = GdsStreamReader.read(file);
+            stream[i] = mb / ((System.nanoTime() - t) / 1e9);
+            streamCpu[i] = mb / ((threads.getCurrentThreadCpuTime() - c) / 1e9);
+            streamGc += gcMillis() - gc;
+            streamRatio[i] = stream[i] / plain[i];
+            sink += s.cells().size();
+            s = null;
+
+            if (i < emfRounds) {
+                gc = gcMillis();
+                c = threads.getCurrentThreadCpuTime();
+                t = System.nanoTime();
+                GdsReadResult r = GdsReader.read(file);
+                emf[i] = mb / ((System.nanoTime() - t) / 1e9);
+                emfCpu[i] = mb / ((threads.getCurrentThreadCpuTime() - c) / 1e9);
+                emfGc += gcMillis() - gc;
+                emfRatio[i] = emf[i] / plain[i];
+                sink += r.library().getCells().size();
+            }
         }
         double p = median(plain);
-        double g = median(reader);
-        System.out.printf("plain sequential read: median %.0f MB/s (best %.0f) wall clock; %.0f MB/s per CPU second%n", p,
-                max(plain), median(plainCpu));
-        System.out.printf("GdsReader to model   : median %.0f MB/s (best %.0f) wall clock; %.0f MB/s per CPU second"
-                + " of the reading thread; GC %.0f ms per read%n", g, max(reader), median(readerCpu),
-                (double) gcMillis / rounds);
-        System.out.printf("reader / plain       : %.2f (goal >= 0.5)%n", g / p);
-        heapPerShape(file);
+        System.out.printf("plain sequential read : median %6.0f MB/s (best %.0f) wall clock; %.0f MB/s per CPU second"
+                + " (%d rounds)%n", p, max(plain), median(plainCpu), rounds);
+        System.out.printf("record walk (floor)   : median %6.0f MB/s wall clock; ratio to plain %.2f (mapped file, record"
+                + " headers followed and every XY value read; no checks, nothing kept)%n", median(walk),
+                median(walk) / p);
+        System.out.printf("GdsStreamReader       : median %6.0f MB/s (best %.0f) wall clock; %.0f MB/s per CPU second"
+                + " of the reading thread; GC %.0f ms per read (%d rounds)%n", median(stream), max(stream),
+                median(streamCpu), (double) streamGc / rounds, rounds);
+        System.out.printf("GdsReader to EMF model: median %6.0f MB/s (best %.0f) wall clock; %.0f MB/s per CPU second"
+                + " of the reading thread; GC %.0f ms per read (%d rounds)%n", median(emf), max(emf), median(emfCpu),
+                (double) emfGc / emfRounds, emfRounds);
+        System.out.printf("streaming / plain     : %.2f (median of per-round ratios %.2f; goal >= 0.5)%n",
+                median(stream) / p, median(streamRatio));
+        System.out.printf("EMF reader / plain    : %.2f (median of per-round ratios %.2f)%n", median(emf) / p,
+                median(emfRatio));
+        heapPerElement(file);
     }
 
-    private static void heapPerShape(Path file) throws IOException {
+    private static void heapPerElement(Path file) throws IOException {
         MemoryMXBean memory = ManagementFactory.getMemoryMXBean();
         long before = usedAfterGc(memory);
-        GdsReadResult r = GdsReader.read(file);
+        StreamLayout s = GdsStreamReader.read(file);
         long after = usedAfterGc(memory);
-        long shapes = 0;
+        long streamElements = s.elementCount();
+        System.out.printf("heap, streaming: %7.1f MB for %d elements (%d shapes) = %.0f bytes per element%n",
+                (after - before) / 1e6, streamElements, s.shapeCount(), (double) (after - before) / streamElements);
+        sink += s.cells().size();
+        s = null;
+
+        before = usedAfterGc(memory);
+        GdsReadResult r = GdsReader.read(file);
+        after = usedAfterGc(memory);
+        long elements = 0;
         for (Cell c : r.library().getCells()) {
-            shapes += c.getElements().size();
+            elements += c.getElements().size();
         }
         Library keep = r.library();
-        System.out.printf("heap: %.1f MB for %d elements = %.0f bytes per element%n", (after - before) / 1e6, shapes,
-                (double) (after - before) / shapes);
+        System.out.printf("heap, EMF model: %7.1f MB for %d elements = %.0f bytes per element%n",
+                (after - before) / 1e6, elements, (double) (after - before) / elements);
         sink += keep.getCells().size();
     }
 
@@ -142,6 +217,32 @@ public final class LayoutReadBenchmark {
             System.gc();
         }
         return memory.getHeapMemoryUsage().getUsed();
+    }
+
+    /**
+     * The least any reader of the format must do: follow the record lengths through a mapped file
+     * and read every XY value. A floor for the streaming reader, printed for context.
+     */
+    private static long recordWalk(Path file) throws IOException {
+        try (FileChannel ch = FileChannel.open(file, StandardOpenOption.READ)) {
+            ByteBuffer b = ch.map(FileChannel.MapMode.READ_ONLY, 0, ch.size());
+            int n = b.capacity();
+            long sum = 0;
+            int pos = 0;
+            while (pos + 4 <= n) {
+                int length = b.getShort(pos) & 0xFFFF;
+                if (length < 4) {
+                    break;
+                }
+                if (b.get(pos + 2) == 0x10) {
+                    for (int p = pos + 4; p < pos + length; p += 4) {
+                        sum += b.getInt(p);
+                    }
+                }
+                pos += length;
+            }
+            return sum;
+        }
     }
 
     private static long plainRead(Path file) throws IOException {

@@ -88,9 +88,10 @@ public final class MigrateCommand implements Callable<Integer> {
             + "(default: the cell's extent).")
     String die;
 
-    @Option(names = "--keep-out", paramLabel = "NM", defaultValue = "1000",
-            description = "Keep-out band on each side of a stitching line, nm (default: ${DEFAULT-VALUE}).")
-    double keepOut;
+    @Option(names = "--keep-out", paramLabel = "NM",
+            description = "Keep-out band on each side of a stitching line, nm; overrides the deck's "
+                    + "'stitch keep-out' of the options (default: the deck's value).")
+    Double keepOut;
 
     @Option(names = "--per-axis", description = "Measure the shrink headroom per axis as well "
             + "(always done for an anamorphic target).")
@@ -164,10 +165,12 @@ public final class MigrateCommand implements Callable<Integer> {
 
     private MigrationOptions options(ProgressPrinter progress) throws InputException {
         MigrationOptions o = MigrationOptions.defaults().withEngine(run.engine(progress)).withPerAxisShrink(perAxis);
-        if (!(keepOut >= 0) || Double.isInfinite(keepOut)) {
-            throw new InputException("--keep-out must be a non-negative number of nm, got " + keepOut);
+        if (keepOut != null) {
+            if (!(keepOut >= 0) || keepOut.isInfinite()) {
+                throw new InputException("--keep-out must be a non-negative number of nm, got " + keepOut);
+            }
+            o = o.withStitchKeepOut(keepOut);
         }
-        o = o.withStitchKeepOut(keepOut);
         if (die != null) {
             String[] wh = die.toLowerCase(java.util.Locale.ROOT).split("x");
             try {

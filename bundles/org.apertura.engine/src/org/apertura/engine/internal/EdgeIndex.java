@@ -10,9 +10,11 @@ import org.apertura.engine.region.MergedLayer;
 
 /**
  * A uniform grid over a layer's edges, built once (O(n + registrations)) and then read by many threads.
- * The cell side is chosen so that a cell holds about {@value #EDGES_PER_CELL} edges on average; an edge
- * is registered in every cell its bounding box touches, so long wires appear in several cells. Cells
- * are stored compressed (cell start offsets into one item array).
+ * The cell side is the power of two at or above the side that gives about {@value #EDGES_PER_CELL}
+ * edges per cell on average (a shift instead of a division per lookup); an edge is registered in every
+ * cell its bounding box touches, so long wires appear in several cells. Cells are stored compressed
+ * (cell start offsets into one item array). {@link PairSearch} walks the cells directly and evaluates a
+ * pair only in the first cell shared by both boxes' cell ranges, so it needs no per-query sort.
  */
 public final class EdgeIndex {
 
@@ -20,9 +22,11 @@ public final class EdgeIndex {
     private static final int MAX_CELLS = 1 << 26;
 
     private final long minX, minY, cell;
-    private final int cols, rows;
-    private final int[] cellStart;
-    private final int[] items;
+    /** log2 of the cell side: cells are powers of two so that a cell number is a shift, not a division */
+    private final int shift;
+    final int cols, rows;
+    final int[] cellStart;
+    final int[] items;
 
     public EdgeIndex(MergedLayer layer) {
         int n = layer.edgeCount();
@@ -41,12 +45,17 @@ public final class EdgeIndex {
         double area = (double) (x1 - x0 + 1) * (y1 - y0 + 1);
         long side = (long) Math.ceil(Math.sqrt(area * EDGES_PER_CELL / Math.max(1, n)));
         side = Math.max(side, 1);
-        while (((x1 - x0) / side + 1) * ((y1 - y0) / side + 1) > MAX_CELLS) {
-            side *= 2;
+        int sh = 63 - Long.numberOfLeadingZeros(side);
+        if ((1L << sh) < side) {
+            sh++;
         }
-        cell = side;
-        cols = (int) ((x1 - x0) / side + 1);
-        rows = (int) ((y1 - y0) / side + 1);
+        while ((((x1 - x0) >> sh) + 1) * (((y1 - y0) >> sh) + 1) > MAX_CELLS) {
+            sh++;
+        }
+        shift = sh;
+        cell = 1L << sh;
+        cols = (int) (((x1 - x0) >> sh) + 1);
+        rows = (int) (((y1 - y0) >> sh) + 1);
         cellStart = new int[cols * rows + 1];
         for (int e = 0; e < n; e++) {
             int ca = col(Math.min(layer.x0(e), layer.x1(e))), cb = col(Math.max(layer.x0(e), layer.x1(e)));
@@ -73,12 +82,19 @@ public final class EdgeIndex {
         }
     }
 
-    private int col(long x) {
-        return (int) Math.min(cols - 1, Math.max(0, (x - minX) / cell));
+    /** Column of x, clamped to the grid. */
+    int col(long x) {
+        return (int) Math.min(cols - 1, Math.max(0, (x - minX) >> shift));
     }
 
-    private int row(long y) {
-        return (int) Math.min(rows - 1, Math.max(0, (y - minY) / cell));
+    /** Row of y, clamped to the grid. */
+    int row(long y) {
+        return (int) Math.min(rows - 1, Math.max(0, (y - minY) >> shift));
+    }
+
+    /** The cell side in database units (a power of two). */
+    public long cellSide() {
+        return cell;
     }
 
     /** A reusable query buffer for one thread. */

@@ -42,26 +42,38 @@ public final class PairSearch {
         return exec.map(tiles.length, t -> {
             List<T> out = new ArrayList<>();
             FacingPair pair = new FacingPair();
-            int[][] buf = EdgeIndex.buffer();
+            int cols = otherIndex.cols;
+            int[] cellStart = otherIndex.cellStart, items = otherIndex.items;
             for (int e : tiles[t]) {
                 long ex0 = Math.min(layer.x0(e), layer.x1(e)), ex1 = Math.max(layer.x0(e), layer.x1(e));
                 long ey0 = Math.min(layer.y0(e), layer.y1(e)), ey1 = Math.max(layer.y0(e), layer.y1(e));
-                int n = otherIndex.query(ex0 - reach, ey0 - reach, ex1 + reach, ey1 + reach, buf);
-                int[] cand = buf[0];
-                for (int k = 0; k < n; k++) {
-                    int f = cand[k];
-                    if (same && f <= e) {
-                        continue;
-                    }
-                    long fx0 = Math.min(other.x0(f), other.x1(f)), fx1 = Math.max(other.x0(f), other.x1(f));
-                    long fy0 = Math.min(other.y0(f), other.y1(f)), fy1 = Math.max(other.y0(f), other.y1(f));
-                    long gx = Math.max(0, Math.max(fx0 - ex1, ex0 - fx1));
-                    long gy = Math.max(0, Math.max(fy0 - ey1, ey0 - fy1));
-                    if (gx >= reach || gy >= reach || (double) gx * gx + (double) gy * gy >= reach2) {
-                        continue;
-                    }
-                    if (pair.evaluate(layer, e, other, f, side) != FacingPair.NONE && pair.distance < reach) {
-                        sink.accept(e, f, pair, out);
+                int ca = otherIndex.col(ex0 - reach), cb = otherIndex.col(ex1 + reach);
+                int ra = otherIndex.row(ey0 - reach), rb = otherIndex.row(ey1 + reach);
+                for (int r = ra; r <= rb; r++) {
+                    for (int c = ca; c <= cb; c++) {
+                        int to = cellStart[r * cols + c + 1];
+                        for (int k = cellStart[r * cols + c]; k < to; k++) {
+                            int f = items[k];
+                            if (same && f <= e) {
+                                continue;
+                            }
+                            long fx0 = Math.min(other.x0(f), other.x1(f)), fx1 = Math.max(other.x0(f), other.x1(f));
+                            long fy0 = Math.min(other.y0(f), other.y1(f)), fy1 = Math.max(other.y0(f), other.y1(f));
+                            long gx = Math.max(0, Math.max(fx0 - ex1, ex0 - fx1));
+                            long gy = Math.max(0, Math.max(fy0 - ey1, ey0 - fy1));
+                            if (gx >= reach || gy >= reach || (double) gx * gx + (double) gy * gy >= reach2) {
+                                continue;
+                            }
+                            // f is registered in every cell of its box; the query meets it in each cell of
+                            // the overlap of both cell ranges: evaluate only in the overlap's first cell
+                            if (Math.max(ca, otherIndex.col(fx0)) != c
+                                    || Math.max(ra, otherIndex.row(fy0)) != r) {
+                                continue;
+                            }
+                            if (pair.evaluate(layer, e, other, f, side) != FacingPair.NONE && pair.distance < reach) {
+                                sink.accept(e, f, pair, out);
+                            }
+                        }
                     }
                 }
             }

@@ -46,34 +46,96 @@ public final class RegionMerger {
         }
         GeometryFactory gf = new GeometryFactory(new PrecisionModel(1.0));
         org.locationtech.jts.index.strtree.STRtree tree = new org.locationtech.jts.index.strtree.STRtree();
+        // mixed: the non-Manhattan polygons first, then the scanline shapes touching one of them
         List<Geometry> mixed = new ArrayList<>();
         for (Polygon p : other) {
             Geometry g = toJts(gf, p);
-            tree.insert(g.getEnvelopeInternal(), g);
+            tree.insert(g.getEnvelopeInternal(), mixed.size());
             mixed.add(g);
         }
+        int[] parent = new int[other.size()];
+        for (int i = 0; i < parent.length; i++) {
+            parent[i] = i;
+        }
+        List<Integer> near = new ArrayList<>();
+        org.locationtech.jts.geom.Envelope env = new org.locationtech.jts.geom.Envelope();
         boolean[] drop = new boolean[m.shapeCount()];
         for (int s = 0; s < m.shapeCount(); s++) {
             org.apertura.engine.geom.Box b = m.bounds(s);
-            List<?> near = tree.query(new org.locationtech.jts.geom.Envelope(b.minX(), b.maxX(), b.minY(), b.maxY()));
+            env.init(b.minX(), b.maxX(), b.minY(), b.maxY());
+            near.clear();
+            tree.query(env, item -> near.add((Integer) item));
             Geometry shape = null;
-            for (Object o : near) {
+            int id = -1;
+            for (int o : near) {
                 if (shape == null) {
                     shape = shapeToJts(gf, m, s);
                 }
-                if (shape.intersects((Geometry) o)) {
-                    drop[s] = true;
-                    mixed.add(shape);
-                    break;
+                if (shape.intersects(mixed.get(o))) {
+                    if (id < 0) {
+                        drop[s] = true;
+                        id = mixed.size();
+                        mixed.add(shape);
+                        parent = grow(parent, id);
+                    }
+                    union(parent, id, o);
                 }
             }
         }
-        Geometry union = UnaryUnionNG.union(gf.buildGeometry(mixed), gf.getPrecisionModel());
+        for (int i = 0; i < other.size(); i++) {
+            near.clear();
+            tree.query(mixed.get(i).getEnvelopeInternal(), item -> near.add((Integer) item));
+            for (int j : near) {
+                if (j > i && find(parent, i) != find(parent, j) && mixed.get(i).intersects(mixed.get(j))) {
+                    union(parent, i, j);
+                }
+            }
+        }
+        // clusters that touch nothing outside themselves are merged one by one: a single overlay of all
+        // of them costs far more (its snap-rounding noder sees every segment at once)
+        int[] count = new int[mixed.size() + 1];
+        for (int i = 0; i < mixed.size(); i++) {
+            count[find(parent, i) + 1]++;
+        }
+        for (int i = 0; i < mixed.size(); i++) {
+            count[i + 1] += count[i];
+        }
+        Geometry[] byCluster = new Geometry[mixed.size()];
+        int[] fill = Arrays.copyOf(count, mixed.size());
+        for (int i = 0; i < mixed.size(); i++) {
+            byCluster[fill[find(parent, i)]++] = mixed.get(i);
+        }
         List<long[]> shells = new ArrayList<>();
         List<List<long[]>> holes = new ArrayList<>();
-        collect(union, shells, holes);
+        for (int c = 0; c < mixed.size(); c++) {
+            if (count[c + 1] > count[c]) {
+                Geometry[] part = Arrays.copyOfRange(byCluster, count[c], count[c + 1]);
+                collect(UnaryUnionNG.union(gf.createGeometryCollection(part), gf.getPrecisionModel()), shells, holes);
+            }
+        }
         sortShapes(shells, holes);
         return m.replace(drop, shells, holes);
+    }
+
+    private static int[] grow(int[] parent, int id) {
+        int[] p = id < parent.length ? parent : Arrays.copyOf(parent, Math.max(2 * parent.length, id + 1));
+        p[id] = id;
+        return p;
+    }
+
+    private static int find(int[] p, int a) {
+        while (p[a] != a) {
+            p[a] = p[p[a]];
+            a = p[a];
+        }
+        return a;
+    }
+
+    private static void union(int[] p, int a, int b) {
+        int ra = find(p, a), rb = find(p, b);
+        if (ra != rb) {
+            p[Math.max(ra, rb)] = Math.min(ra, rb);
+        }
     }
 
     private static Geometry shapeToJts(GeometryFactory gf, MergedLayer m, int s) {
@@ -258,15 +320,33 @@ public final class RegionMerger {
         long[] cur = c;
         while (changed && n >= 3) {
             changed = false;
+            // repeated vertices first: judged together with collinearity, both copies of a repeated
+            // vertex would look collinear (a zero-length neighbour edge) and vanish in the same pass
             long[] out = new long[2 * n];
             int m = 0;
+            for (int i = 0; i < n; i++) {
+                int p = (i + n - 1) % n;
+                if (cur[2 * i] == cur[2 * p] && cur[2 * i + 1] == cur[2 * p + 1]) {
+                    changed = true;
+                    continue;
+                }
+                out[2 * m] = cur[2 * i];
+                out[2 * m + 1] = cur[2 * i + 1];
+                m++;
+            }
+            if (m == 0) {
+                // every vertex equal to its predecessor: a single point
+                return null;
+            }
+            cur = out;
+            n = m;
+            out = new long[2 * n];
+            m = 0;
             for (int i = 0; i < n; i++) {
                 int p = (i + n - 1) % n, q = (i + 1) % n;
                 long ax = cur[2 * i] - cur[2 * p], ay = cur[2 * i + 1] - cur[2 * p + 1];
                 long bx = cur[2 * q] - cur[2 * i], by = cur[2 * q + 1] - cur[2 * i + 1];
-                boolean dup = ax == 0 && ay == 0;
-                boolean collinear = ax * by - ay * bx == 0;
-                if (dup || collinear) {
+                if (ax * by - ay * bx == 0) {
                     changed = true;
                     continue;
                 }

@@ -131,6 +131,9 @@ public record DraftDeck(String name, String text, List<DeckDiagnostic> diagnosti
             if (tgt.throughput().isPresent()) {
                 line("\tthroughput " + num(tgt.throughput().getAsDouble()) + " wph");
             }
+            if (tgt.stitchKeepOutNm().isPresent()) {
+                line("\tstitch keep-out " + num(tgt.stitchKeepOutNm().getAsDouble()) + " nm");
+            }
             for (Layer l : deck.layers()) {
                 if (only.isEmpty() || only.contains(l.name())) {
                     layer(l);

@@ -18,8 +18,10 @@ import org.apertura.engine.geom.Box;
  * @param scope       uniform, or along one axis
  * @param factor      the smallest linear scale factor (at most 1) the layout takes without a new
  *                    violation of the rule; when {@code bounded} the true factor is at most this
- * @param bounded     true when no place limits the shrink down to the probe's floor, so {@code factor}
- *                    is that floor (1 / probe factor) and the headroom is at least {@code headroom()}
+ * @param bounded     true when no place limits the shrink down to {@code factor}, so the true factor is
+ *                    at most it and the headroom at least {@code headroom()}: the probe's floor
+ *                    (1 / probe factor), for measure-mode rules the rule over the measuring range,
+ *                    or 0 when no place can newly fail at all (see {@link MeasuredShrink})
  * @param limitingPlace where the limit is (database units), empty when bounded
  * @param measured    the limiting measured value at scale 1, in nm (nm² for areas), empty when bounded
  * @param required    the rule value the limiting place must keep, in nm (nm² for areas), empty when bounded

@@ -22,16 +22,19 @@ import org.apertura.migrate.check.RuleSet;
 import org.apertura.rules.resolved.ResolvedDeck;
 
 /**
- * Shrink headroom from measurement: how far the layout could be scaled down under an option before
- * a rule that holds now starts to fail.
+ * Shrink headroom: how far the layout could be scaled down under an option before a rule that holds
+ * now starts to fail.
  * <p>
- * Measuring: the layout is checked with probe rules whose lengths are {@code k} times the option's
- * (areas k²), see {@link EngineRules#probe}. Every place a rule would fail at scale {@code 1/k} or
- * above is then a probe violation carrying its measured value m; the place fails at scale f when
- * {@code f·m < R}, so it allows {@code f ≥ R/m} ({@code √(R/A)} for areas), and the layer's factor is
- * the largest such bound — the limiting place. Places already failing at scale 1 (R/m &gt; 1) are not
- * new violations and are left out. When nothing limits down to 1/k, the factor is reported as 1/k
- * and marked {@link Headroom#bounded()}.
+ * Uniform shrink of width, spacing, pitch and area rules comes from the engine's measure mode, exact
+ * and without a floor: see {@link MeasuredShrink}. Everything else — end-of-line, enclosure, spacing
+ * with a width/run table, and every per-axis figure — is measured with probe rules whose lengths are
+ * {@code k} times the option's (areas k²), see {@link EngineRules#probe}. Every place a rule would fail
+ * at scale {@code 1/k} or above is then a probe violation carrying its measured value m; the place
+ * fails at scale f when {@code f·m < R}, so it allows {@code f ≥ R/m} ({@code √(R/A)} for areas), and
+ * the factor is the largest such bound — the limiting place. Places already failing at scale 1
+ * (R/m &gt; 1) are not new violations and are left out. When nothing limits down to 1/k, the factor is
+ * reported as 1/k and marked {@link Headroom#bounded()}. A layer's uniform figure ({@code rule = *})
+ * is its most limiting rule.
  * <p>
  * Per axis (x scaled by f, y kept): for a place whose closest points are (dx, dy) apart the distance
  * becomes {@code √(f²dx² + dy²)}, which keeps R when {@code f ≥ √(R² − dy²)/|dx|}; pitches and areas
@@ -105,7 +108,33 @@ public final class ShrinkHeadroom {
         for (Best b : best.values()) {
             out.add(b.toHeadroom(floor));
         }
+        // uniform width, spacing, pitch and area: exact from measure mode, without the probe's floor
+        Map<String, Headroom> exact = new LinkedHashMap<>();
+        for (Headroom h : MeasuredShrink.uniform(deck, option, layers, merged, engine)) {
+            exact.put(key(h.layer(), h.rule(), h.scope()), h);
+        }
+        out.replaceAll(h -> exact.getOrDefault(key(h.layer(), h.rule(), h.scope()), h));
+        out.replaceAll(h -> h.rule().equals("*") && h.scope() == ShrinkScope.UNIFORM ? layerOf(h, out) : h);
         return out;
+    }
+
+    /** The layer's uniform headroom: its most limiting rule (largest factor; exact before bounded). */
+    private static Headroom layerOf(Headroom star, List<Headroom> all) {
+        Headroom worst = null;
+        for (Headroom h : all) {
+            if (!h.layer().equals(star.layer()) || h.rule().equals("*") || h.scope() != ShrinkScope.UNIFORM) {
+                continue;
+            }
+            if (worst == null || h.factor() > worst.factor()
+                    || h.factor() == worst.factor() && worst.bounded() && !h.bounded()) {
+                worst = h;
+            }
+        }
+        if (worst == null) {
+            return star;
+        }
+        return new Headroom(star.layer(), "*", ShrinkScope.UNIFORM, worst.factor(), worst.bounded(),
+                worst.limitingPlace(), worst.measured(), worst.required());
     }
 
     private static String key(String layer, String rule, ShrinkScope s) {

@@ -58,6 +58,7 @@ import org.apertura.rules.deck.SpacerDivision;
 import org.apertura.rules.deck.SpacingCondition;
 import org.apertura.rules.deck.SpacingRule;
 import org.apertura.rules.deck.Technology;
+import org.apertura.rules.deck.StitchKeepOut;
 import org.apertura.rules.deck.Throughput;
 import org.apertura.rules.deck.TipBound;
 import org.apertura.rules.deck.Value;
@@ -433,12 +434,14 @@ public final class DeckResolver {
 			return "demagnification";
 		} else if (s instanceof ExposureField) {
 			return "field";
+		} else if (s instanceof StitchKeepOut) {
+			return "stitch keep-out";
 		}
 		return "throughput";
 	}
 
 	private static int settingDimension(OptionSetting s) {
-		return s instanceof Wavelength || s instanceof ExposureField ? 1 : 0;
+		return s instanceof Wavelength || s instanceof ExposureField || s instanceof StitchKeepOut ? 1 : 0;
 	}
 
 	private void checkSettings(Option o) {
@@ -765,6 +768,8 @@ public final class DeckResolver {
 				return "demagnification";
 			} else if (type == ExposureField.class) {
 				return "field";
+			} else if (type == StitchKeepOut.class) {
+				return "stitch keep-out";
 			}
 			return "throughput";
 		}
@@ -775,10 +780,10 @@ public final class DeckResolver {
 			Map<Class<?>, BigDecimal[]> values = new HashMap<>();
 			boolean broken = false;
 			for (Class<?> type : List.of(Wavelength.class, NumericalAperture.class, K1Floor.class, K2.class,
-					Demagnification.class, ExposureField.class, Throughput.class)) {
+					Demagnification.class, ExposureField.class, Throughput.class, StitchKeepOut.class)) {
 				OptionSetting s = setting(type);
 				if (s == null) {
-					if (type != Throughput.class) {
+					if (type != Throughput.class && type != StitchKeepOut.class) {
 						missing.add(typeName(type));
 					}
 					continue;
@@ -810,6 +815,7 @@ public final class DeckResolver {
 			BigDecimal[] demag = values.get(Demagnification.class);
 			BigDecimal[] field = values.get(ExposureField.class);
 			BigDecimal[] tp = values.get(Throughput.class);
+			BigDecimal[] keepOut = values.get(StitchKeepOut.class);
 			Option parent = option.getParent();
 			return new LithographyOption(option.getName(), option.getDescription() == null ? "" : option.getDescription(),
 					parent == null || parent.eIsProxy() ? Optional.empty() : Optional.ofNullable(parent.getName()),
@@ -817,7 +823,8 @@ public final class DeckResolver {
 					values.get(K1Floor.class)[0].doubleValue(), values.get(K2.class)[0].doubleValue(),
 					demag[0].doubleValue(), demag[1].doubleValue(),
 					field[0].movePointLeft(6).doubleValue(), field[1].movePointLeft(6).doubleValue(),
-					tp == null ? OptionalDouble.empty() : OptionalDouble.of(tp[0].doubleValue()));
+					tp == null ? OptionalDouble.empty() : OptionalDouble.of(tp[0].doubleValue()),
+					keepOut == null ? OptionalDouble.empty() : OptionalDouble.of(keepOut[0].doubleValue()));
 		}
 
 		private void checkRange(OptionSetting s, Class<?> type, BigDecimal v) {
@@ -840,6 +847,11 @@ public final class DeckResolver {
 			} else if (type == Demagnification.class && v.compareTo(BigDecimal.ONE) < 0) {
 				report(s, DeckPackage.Literals.OPTION_SETTING__VALUE, Severity.ERROR, DeckIssueCodes.OPTICS_OUT_OF_RANGE,
 						"a demagnification below 1 would enlarge the mask image", option);
+			} else if (type == StitchKeepOut.class && unitsKnown && !isInteger(v.divide(gridNm, Evaluator.MATH))) {
+				report(s, DeckPackage.Literals.OPTION_SETTING__VALUE, Severity.ERROR, DeckIssueCodes.OFF_GRID,
+						"the stitch keep-out of option '" + option.getName() + "' is " + show(v) + " nm, off the "
+								+ show(gridNm) + " nm manufacturing grid",
+						option);
 			}
 		}
 	}

@@ -25,10 +25,13 @@ import java.util.OptionalDouble;
  * @param fieldXMm          exposure field width in millimetres (wafer side)
  * @param fieldYMm          exposure field height in millimetres (wafer side)
  * @param throughput        wafers per hour, if the deck states it
+ * @param stitchKeepOutNm   the keep-out band on each side of a stitching line, in nanometres (wafer side),
+ *                          if the deck states it ({@code stitch keep-out 2 um}); a positive value on the
+ *                          manufacturing grid
  */
 public record LithographyOption(String name, String description, Optional<String> parent, double wavelengthNm,
 		double numericalAperture, double k1Floor, double k2, double demagnificationX, double demagnificationY,
-		double fieldXMm, double fieldYMm, OptionalDouble throughput) {
+		double fieldXMm, double fieldYMm, OptionalDouble throughput, OptionalDouble stitchKeepOutNm) {
 
 	/** The physical k1 limit of a single exposure (half-pitch k1; textbook, e.g. Mack 2007). */
 	public static final double PHYSICAL_K1_LIMIT = 0.25;
@@ -39,6 +42,15 @@ public record LithographyOption(String name, String description, Optional<String
 		Objects.requireNonNull(description, "description");
 		Objects.requireNonNull(parent, "parent");
 		Objects.requireNonNull(throughput, "throughput");
+		Objects.requireNonNull(stitchKeepOutNm, "stitchKeepOutNm");
+	}
+
+	/** An option without a stitch keep-out band. */
+	public LithographyOption(String name, String description, Optional<String> parent, double wavelengthNm,
+			double numericalAperture, double k1Floor, double k2, double demagnificationX, double demagnificationY,
+			double fieldXMm, double fieldYMm, OptionalDouble throughput) {
+		this(name, description, parent, wavelengthNm, numericalAperture, k1Floor, k2, demagnificationX,
+				demagnificationY, fieldXMm, fieldYMm, throughput, OptionalDouble.empty());
 	}
 
 	/**

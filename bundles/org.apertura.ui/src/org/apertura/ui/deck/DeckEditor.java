@@ -27,10 +27,19 @@ import org.eclipse.jface.text.BadLocationException;
 import org.eclipse.jface.text.DocumentEvent;
 import org.eclipse.jface.text.IDocument;
 import org.eclipse.jface.text.IDocumentListener;
+import org.eclipse.jface.text.IRegion;
+import org.eclipse.jface.text.ITextHover;
+import org.eclipse.jface.text.contentassist.ICompletionProposal;
+import org.eclipse.jface.text.contentassist.IContentAssistant;
+import org.eclipse.jface.text.ITextPresentationListener;
+import org.eclipse.jface.text.ITextViewerExtension4;
+import org.eclipse.jface.text.TextPresentation;
 import org.eclipse.jface.text.source.ISourceViewer;
 import org.eclipse.jface.viewers.ITreeContentProvider;
 import org.eclipse.jface.viewers.LabelProvider;
 import org.eclipse.jface.viewers.TreeViewer;
+import org.eclipse.swt.custom.StyleRange;
+import org.eclipse.swt.graphics.Color;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.ui.IEditorInput;
 import org.eclipse.ui.IFileEditorInput;
@@ -47,9 +56,11 @@ import org.eclipse.xtext.validation.Issue;
  * The deck editor. Keyword, number, unit and comment colours come from a rule-based scanner fed with
  * the grammar's keywords; 400 ms after each change a job parses and validates the text with the Xtext
  * runtime and turns the issues into problem markers on the file (shown in the editor's ruler, as
- * squiggles and in the Problems view) and refreshes the outline. Ctrl+Space proposes completions from
+ * squiggles and in the Problems view), refreshes the outline and colours what the ide module's semantic
+ * highlighter finds (layer and option names, units, optics symbols, rule references; {@link DeckStyles})
+ * over the keyword colours. Ctrl+Space proposes completions from
  * the ide module; Format Deck (Ctrl+Shift+F) runs the language's formatter; hovering in a layer's rule
- * block shows the k1 of its pitch under every option.
+ * block (or Show Information, F2, with the caret there) shows the k1 of its pitch under every option.
  */
 public final class DeckEditor extends TextEditor {
 
@@ -68,9 +79,23 @@ public final class DeckEditor extends TextEditor {
         }
     };
 
+    /**
+     * Semantic highlighting of one text: positions of the ide module's calculator.
+     *
+     * @param text      the text the positions were computed for (they apply only while it is unchanged)
+     * @param positions offset, length and style identifier of each position
+     */
+    private record Highlights(String text, List<Highlight> positions) {
+    }
+
+    private record Highlight(int offset, int length, String style) {
+    }
+
     private final Job validation = Job.create("Validating deck", this::validateNow);
     private volatile List<Issue> lastIssues = List.of();
     private volatile EObject lastModel;
+    private volatile Highlights highlights = new Highlights("", List.of());
+    private final ITextPresentationListener semanticColours = this::applyHighlights;
     private Outline outline;
     private final IDocumentListener changes = new IDocumentListener() {
         @Override
@@ -110,6 +135,55 @@ public final class DeckEditor extends TextEditor {
         assist.setActionDefinitionId(ITextEditorActionDefinitionIds.CONTENT_ASSIST_PROPOSALS);
         setAction("ContentAssistProposal", assist);
         markAsStateDependentAction("ContentAssistProposal", true);
+    }
+
+    @Override
+    public void createPartControl(Composite parent) {
+        super.createPartControl(parent);
+        if (getSourceViewer() instanceof ITextViewerExtension4 v) {
+            v.addTextPresentationListener(semanticColours);
+        }
+    }
+
+    /** Draws the semantic positions over the lexical colours, when they belong to the text shown. */
+    private void applyHighlights(TextPresentation presentation) {
+        Highlights h = highlights;
+        IDocument doc = getDocumentProvider() == null ? null : getDocumentProvider().getDocument(getEditorInput());
+        if (doc == null || h.positions().isEmpty() || !h.text().equals(doc.get())) {
+            return;
+        }
+        IRegion extent = presentation.getExtent();
+        int from = extent.getOffset();
+        int to = from + extent.getLength();
+        org.eclipse.swt.widgets.Display display = getSourceViewer().getTextWidget().getDisplay();
+        for (Highlight p : h.positions()) {
+            if (p.offset() + p.length() <= from || p.offset() >= to || p.length() <= 0) {
+                continue;
+            }
+            DeckStyles.of(p.style()).ifPresent(style -> {
+                int start = Math.max(from, p.offset());
+                int end = Math.min(to, p.offset() + p.length());
+                StyleRange range = new StyleRange(start, end - start, new Color(display, style.colour()), null,
+                        style.fontStyle());
+                presentation.mergeStyleRange(range);
+            });
+        }
+    }
+
+    /** The semantic style identifiers at an offset of the text last highlighted, for tests. */
+    public List<String> highlightStylesAt(int offset) {
+        return highlights.positions().stream().filter(p -> p.offset() <= offset && offset < p.offset() + p.length())
+                .map(Highlight::style).toList();
+    }
+
+    private List<Highlight> computeHighlights(XtextResource resource, CancelIndicator cancel) {
+        List<Highlight> out = new ArrayList<>();
+        DeckLanguage.get().highlight(resource, (offset, length, ids) -> {
+            for (String id : ids) {
+                out.add(new Highlight(offset, length, id));
+            }
+        }, cancel);
+        return List.copyOf(out);
     }
 
     /** The file system path of the deck, if it has one. */
@@ -155,14 +229,23 @@ public final class DeckEditor extends TextEditor {
             if (monitor.isCanceled()) {
                 return Status.CANCEL_STATUS;
             }
+            List<Highlight> positions = computeHighlights(resource, cancel);
+            if (monitor.isCanceled()) {
+                return Status.CANCEL_STATUS;
+            }
             lastIssues = List.copyOf(issues);
             lastModel = resource.getContents().isEmpty() ? null : resource.getContents().get(0);
+            highlights = new Highlights(text, positions);
             updateMarkers(issues);
             Composite c = getSourceViewer() == null ? null : getSourceViewer().getTextWidget();
             if (c != null && !c.isDisposed()) {
                 c.getDisplay().asyncExec(() -> {
                     if (outline != null) {
                         outline.refresh(lastModel);
+                    }
+                    ISourceViewer v = getSourceViewer();
+                    if (v != null && v.getTextWidget() != null && !v.getTextWidget().isDisposed()) {
+                        v.invalidateTextPresentation();
                     }
                 });
             }
@@ -223,6 +306,25 @@ public final class DeckEditor extends TextEditor {
         }
     }
 
+    /**
+     * The completion proposals at an offset, as the editor's content assistant computes them for
+     * Ctrl+Space (must run on the UI thread).
+     */
+    public ICompletionProposal[] proposalsAt(int offset) {
+        ISourceViewer v = getSourceViewer();
+        IContentAssistant assistant = getSourceViewerConfiguration().getContentAssistant(v);
+        ICompletionProposal[] out = assistant.getContentAssistProcessor(IDocument.DEFAULT_CONTENT_TYPE)
+                .computeCompletionProposals(v, offset);
+        return out == null ? new ICompletionProposal[0] : out;
+    }
+
+    /** The hover text at an offset, as the editor's text hover computes it; null where there is none. */
+    public String hoverAt(int offset) {
+        ISourceViewer v = getSourceViewer();
+        ITextHover hover = getSourceViewerConfiguration().getTextHover(v, IDocument.DEFAULT_CONTENT_TYPE);
+        return hover.getHoverInfo(v, hover.getHoverRegion(v, offset));
+    }
+
     /** The source viewer, for tests. */
     public ISourceViewer viewer() {
         return getSourceViewer();
@@ -242,6 +344,9 @@ public final class DeckEditor extends TextEditor {
     @Override
     public void dispose() {
         validation.cancel();
+        if (getSourceViewer() instanceof ITextViewerExtension4 v) {
+            v.removeTextPresentationListener(semanticColours);
+        }
         IDocument doc = getDocumentProvider() == null ? null : getDocumentProvider().getDocument(getEditorInput());
         if (doc != null) {
             doc.removeDocumentListener(changes);

@@ -24,6 +24,9 @@ import org.eclipse.jface.text.contentassist.IContentAssistProcessor;
 import org.eclipse.jface.text.contentassist.IContentAssistant;
 import org.eclipse.jface.text.contentassist.IContextInformation;
 import org.eclipse.jface.text.contentassist.IContextInformationValidator;
+import org.eclipse.jface.text.information.IInformationPresenter;
+import org.eclipse.jface.text.information.IInformationProvider;
+import org.eclipse.jface.text.information.InformationPresenter;
 import org.eclipse.jface.text.presentation.IPresentationReconciler;
 import org.eclipse.jface.text.presentation.PresentationReconciler;
 import org.eclipse.jface.text.rules.DefaultDamagerRepairer;
@@ -111,6 +114,26 @@ final class DeckViewerConfiguration extends TextSourceViewerConfiguration {
     @Override
     public ITextHover getTextHover(ISourceViewer viewer, String contentType) {
         return new K1Hover();
+    }
+
+    /** Show Information (F2) at the caret shows the same k1 text as the hover, without a mouse. */
+    @Override
+    public IInformationPresenter getInformationPresenter(ISourceViewer viewer) {
+        InformationPresenter presenter = new InformationPresenter(getInformationControlCreator(viewer));
+        K1Hover hover = new K1Hover();
+        presenter.setInformationProvider(new IInformationProvider() {
+            @Override
+            public IRegion getSubject(ITextViewer textViewer, int offset) {
+                return hover.getHoverRegion(textViewer, offset);
+            }
+
+            @Override
+            public String getInformation(ITextViewer textViewer, IRegion subject) {
+                return hover.getHoverInfo(textViewer, subject);
+            }
+        }, IDocument.DEFAULT_CONTENT_TYPE);
+        presenter.setSizeConstraints(70, 7, true, true);
+        return presenter;
     }
 
     @Override

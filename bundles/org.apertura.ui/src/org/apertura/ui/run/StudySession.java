@@ -23,14 +23,22 @@ public final class StudySession {
      * A finished study and where its inputs came from.
      *
      * @param result the study
-     * @param deck   the deck file
-     * @param layout the layout file
+     * @param deck   the deck file; empty for a study read back from a saved file (which does not
+     *               record its deck)
+     * @param layout the layout file (as recorded in a saved study: it may no longer exist)
+     * @param saved  the {@code *.apstudy} file the study was read from; empty for a fresh run
      */
-    public record Study(MigrationResult result, Path deck, Path layout) {
+    public record Study(MigrationResult result, Optional<Path> deck, Path layout, Optional<Path> saved) {
         public Study {
             Objects.requireNonNull(result, "result");
             Objects.requireNonNull(deck, "deck");
             Objects.requireNonNull(layout, "layout");
+            Objects.requireNonNull(saved, "saved");
+        }
+
+        /** A fresh run of the deck over the layout. */
+        public Study(MigrationResult result, Path deck, Path layout) {
+            this(result, Optional.of(deck), layout, Optional.empty());
         }
     }
 

@@ -106,7 +106,7 @@ public final class MigrationView extends ViewPart {
         fieldBox.setLayout(new FillLayout());
         field = new Text(fieldBox, SWT.MULTI | SWT.READ_ONLY | SWT.V_SCROLL | SWT.WRAP);
         tab(tabs, "Field && stitching", fieldBox);
-        sash.setWeights(55, 45);
+        sash.setWeights(60, 40);
         StudySession.get().addListener(listener);
         StudySession.get().current().ifPresent(this::show);
     }
@@ -124,7 +124,8 @@ public final class MigrationView extends ViewPart {
         }
         study = s;
         MigrationResult r = s.result();
-        summary.setText(String.format(Locale.ROOT,
+        String origin = s.saved().map(f -> "saved study " + f.getFileName() + " · ").orElse("");
+        summary.setText(origin + String.format(Locale.ROOT,
                 "%s · %s (cell %s) · %s → %s · layers %s · %d masks saved, %d exposures saved · %d new, %d fixed violations",
                 r.technology(), s.layout().getFileName(), r.topCell(), r.from(), r.to(), String.join(", ", r.layers()),
                 r.masks().masksSaved(), r.masks().exposuresSaved(), r.impact().total().newCount(),
@@ -180,6 +181,9 @@ public final class MigrationView extends ViewPart {
                 }
                 col++;
             }
+        }
+        for (TableColumn c : matrix.getColumns()) {
+            c.pack(); // to the widest of header and cells, so no value is cut off
         }
         matrix.setRedraw(true);
     }
@@ -241,6 +245,9 @@ public final class MigrationView extends ViewPart {
         total.setText(new String[] {"Total", "", "", r.masks().sourceMasks() + " → " + r.masks().targetMasks()
                 + " (" + r.masks().masksSaved() + " saved)", r.masks().exposuresSaved() + " saved",
                 seconds(r.masks().sourceSeconds()) + " → " + seconds(r.masks().targetSeconds())});
+        for (TableColumn c : masks.getColumns()) {
+            c.pack();
+        }
     }
 
     private static String seconds(java.util.OptionalDouble s) {
@@ -322,6 +329,11 @@ public final class MigrationView extends ViewPart {
     public void showTab(int i) {
         TabFolder tabs = (TabFolder) headroomChart.getParent();
         tabs.setSelection(i);
+    }
+
+    /** The summary line above the matrix, for tests. */
+    public String getSummary() {
+        return summary.getText();
     }
 
     /** The matrix table, for tests. */

@@ -20,6 +20,8 @@ import org.apertura.engine.check.Violation;
 import org.apertura.engine.check.ViolationKind;
 import org.apertura.engine.geom.Box;
 import org.apertura.engine.geom.Polygon;
+import org.apertura.engine.region.MergedLayer;
+import org.apertura.engine.region.RegionMerger;
 import org.apertura.engine.rule.AreaRule;
 import org.apertura.engine.rule.AxisValue;
 import org.apertura.engine.rule.DensityRule;
@@ -39,6 +41,17 @@ class HandComputedTest {
 
     private static SpacingRule spacing(long s, Metric m) {
         return new SpacingRule("S", "L", AxisValue.of(s), m, Optional.empty());
+    }
+
+    @Test
+    void diamondWithRepeatedVerticesAloneSurvivesTheMerge() {
+        // a 45-degree square with diagonals 24 and 24 (area 24 * 24 / 2 = 288), every vertex given twice,
+        // touching nothing else: it is merged on its own and must keep its 4 corners
+        Polygon diamond = Polygon.of(288, 384, 288, 384, 300, 396, 300, 396, 288, 408, 288, 408, 276, 396, 276, 396);
+        MergedLayer m = RegionMerger.merge("L", List.of(Polygon.rectangle(0, 0, 10, 10), diamond));
+        assertThat(m.shapeCount()).isEqualTo(2);
+        assertThat(m.area(0) + m.area(1)).isEqualTo(100.0 + 288.0);
+        assertThat(m.edgeCount()).isEqualTo(4 + 4);
     }
 
     @Test

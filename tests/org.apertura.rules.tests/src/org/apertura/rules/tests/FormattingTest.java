@@ -61,7 +61,7 @@ class FormattingTest extends DeckTestSupport {
 			option euv
 			  "EUV" {  wavelength 13.5 nm NA 0.33 k1 floor 0.3 k2 0.5
 			demagnification x 4 y 8 field x 26 mm y 16.5 mm
-			throughput 150 wph
+			throughput 150 wph   stitch   keep-out 2  um
 			// the metal
 			on M1 { patterning litho-etch 2 width pitch/2 spacing   pitch - width projection
 			spacing 40 nm if width > 100 nm and run >= 1 um
@@ -87,6 +87,7 @@ class FormattingTest extends DeckTestSupport {
 				demagnification x 4 y 8
 				field x 26 mm y 16.5 mm
 				throughput 150 wph
+				stitch keep-out 2 um
 
 				// the metal
 				on M1 {

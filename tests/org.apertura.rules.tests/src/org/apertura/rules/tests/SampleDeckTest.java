@@ -54,6 +54,9 @@ class SampleDeckTest extends DeckTestSupport {
 		assertThat(hna.fieldYMm()).isEqualTo(16.5);
 		assertThat(hna.isAnamorphic()).isTrue();
 		assertThat(hna.throughput()).hasValue(185);
+		// the half-field option states its stitch keep-out band (invented value, 2 µm); full-field options have none
+		assertThat(hna.stitchKeepOutNm()).hasValue(2000);
+		assertThat(deck.option("euv_se").orElseThrow().stitchKeepOutNm()).isEmpty();
 	}
 
 	@Test

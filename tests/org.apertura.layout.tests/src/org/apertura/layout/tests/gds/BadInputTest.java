@@ -24,7 +24,11 @@ import org.apertura.layout.model.Boundary;
 import org.apertura.layout.model.Cell;
 import org.apertura.layout.model.CellReference;
 import org.apertura.layout.model.LayoutFactory;
+import org.apertura.layout.stream.GdsStreamReader;
+import org.apertura.layout.stream.StreamFlattener;
+import org.apertura.layout.stream.StreamLayout;
 import org.apertura.layout.tests.TestData;
+import org.apertura.layout.tests.stream.StreamEquivalence;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
@@ -32,16 +36,26 @@ import org.junit.jupiter.params.provider.ValueSource;
 /**
  * Bad input gives a clear exception naming the byte offset or the cell and the problem, never a
  * hang, a stack overflow or an out-of-memory. Record layout per the GDS II Stream Format Manual 6.0.
+ * Every rejected file is also given to the streaming reader, which must throw the same exception
+ * (file, byte offset, problem); hierarchy errors are checked on the streaming flattener too.
  */
 class BadInputTest {
 
+    /** Both the EMF reader and the streaming reader reject the bytes with the same file, offset and problem. */
     private static GdsFormatException readFails(byte[] bytes) {
-        return assertThrows(GdsFormatException.class,
-                () -> GdsReader.read(new ByteArrayInputStream(bytes), "bad.gds"));
+        return StreamEquivalence.bothFail(bytes, "bad.gds");
     }
 
     private static GdsReadResult read(byte[] bytes) throws IOException {
         return GdsReader.read(new ByteArrayInputStream(bytes), "bad.gds");
+    }
+
+    /** The streaming path flattens the top cell of the bytes with the same exception as the EMF path. */
+    private static void streamFlattenFailsAlike(byte[] bytes, LayoutHierarchyException expected) throws IOException {
+        StreamLayout layout = GdsStreamReader.read(bytes, "bad.gds");
+        LayoutHierarchyException e = assertThrows(LayoutHierarchyException.class,
+                () -> StreamFlattener.flatten(layout, layout.topCells().get(0)));
+        assertEquals(expected.getMessage(), e.getMessage());
     }
 
     @ParameterizedTest(name = "cut after {0} bytes")
@@ -147,6 +161,7 @@ class BadInputTest {
         LayoutHierarchyException e = assertThrows(LayoutHierarchyException.class,
                 () -> Flattener.flatten(r.topCells().get(0)));
         assertTrue(e.getMessage().contains("hierarchy is 20000 levels deep, more than the bound of 64"), e.getMessage());
+        streamFlattenFailsAlike(g.bytes(), e);
     }
 
     @ParameterizedTest(name = "COLROW {0} x {1}")
@@ -171,6 +186,7 @@ class BadInputTest {
         Cell top = read(g.bytes()).topCells().get(0);
         LayoutHierarchyException e = assertThrows(LayoutHierarchyException.class, () -> Flattener.flatten(top));
         assertEquals("TOP/LEAF: coordinate 4000000000 outside the 32-bit range after transformation", e.getMessage());
+        streamFlattenFailsAlike(g.bytes(), e);
     }
 
     @Test
@@ -208,6 +224,7 @@ class BadInputTest {
         LayoutHierarchyException e = assertThrows(LayoutHierarchyException.class, () -> Flattener.flatten(top));
         assertEquals("L4: flattening would give more than 2^63 vertices and placements, more than the bound of 100000000",
                 e.getMessage());
+        streamFlattenFailsAlike(g.bytes(), e);
     }
 
     @Test
@@ -229,6 +246,7 @@ class BadInputTest {
         // (8000 vertices + 1 placement) x 1,000,000 instances
         assertEquals("TOP: flattening would give 8001000000 vertices and placements, more than the bound of 100000000",
                 e.getMessage());
+        streamFlattenFailsAlike(g.bytes(), e);
     }
 
     @Test

@@ -4,6 +4,7 @@
  */
 package org.apertura.layout.tests.gds;
 
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTimeoutPreemptively;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
@@ -26,7 +27,9 @@ import org.apertura.layout.gds.GdsWriter;
 import org.apertura.layout.hierarchy.LayoutHierarchyException;
 import org.apertura.layout.model.Cell;
 import org.apertura.layout.model.Library;
+import org.apertura.layout.stream.GdsStreamReader;
 import org.apertura.layout.tests.TestData;
+import org.apertura.layout.tests.stream.StreamEquivalence;
 import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
@@ -38,7 +41,9 @@ import org.junit.jupiter.params.provider.MethodSource;
  * {@link GdsFormatException}. Models are then flattened (bounded; a {@link LayoutHierarchyException}
  * is an accepted outcome) and written and read back, which must give an equal model unless the
  * writer refuses content the format cannot hold (IllegalArgumentException). Any other exception, a
- * stack overflow or an out-of-memory fails the test.
+ * stack overflow or an out-of-memory fails the test. Each mutant also goes through the streaming
+ * reader and flattener, which must agree: the same exception (file, byte offset, problem), or the
+ * same cells, warnings and flattened polygons.
  */
 class FuzzTest {
 
@@ -83,9 +88,19 @@ class FuzzTest {
             result = GdsReader.read(new ByteArrayInputStream(mutant), "mutant.gds");
         } catch (GdsFormatException e) {
             assertTrue(e.getMessage().startsWith("mutant.gds: "), e.getMessage());
+            // the streaming reader rejects the mutant with the same file, offset and problem
+            GdsFormatException s = assertThrows(GdsFormatException.class, () -> GdsStreamReader.read(mutant, "mutant.gds"),
+                    label + ": the streaming reader accepts what GdsReader rejects: " + e.getMessage());
+            StreamEquivalence.assertSameFailure(e, s);
             return false;
         } catch (IOException | RuntimeException | StackOverflowError e) {
             throw new AssertionError(label + ": unexpected " + e, e);
+        }
+        // the streaming reader accepts it too, with the same cells, warnings and flattened polygons
+        try {
+            StreamEquivalence.assertSameLayout(result, GdsStreamReader.read(mutant, "mutant.gds"), BOUNDED);
+        } catch (IOException | RuntimeException | StackOverflowError e) {
+            throw new AssertionError(label + ": streaming path failed with " + e, e);
         }
         for (Cell top : result.topCells()) {
             try {

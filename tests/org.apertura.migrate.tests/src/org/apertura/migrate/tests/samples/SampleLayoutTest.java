@@ -97,5 +97,7 @@ class SampleLayoutTest {
         ResolvedDeck draft = new DeckLoader().load(repo.resolve("samples/decks/draft.apdeck"), d.text()).orElseThrow();
         // GATE pitch 48 nm x 0.6 = 28.8 -> 29 nm, raised to width 10 + spacing 19.5 = 29.5 nm (0.25 nm units)
         assertEquals(118, draft.value(d.name(), "GATE", org.apertura.rules.resolved.RuleKind.PITCH).orElseThrow().value());
+        // the target option's stitch keep-out (2 um in the sample deck) is carried into the draft
+        assertEquals(2000, draft.option(d.name()).orElseThrow().stitchKeepOutNm().getAsDouble(), 1e-9);
     }
 }

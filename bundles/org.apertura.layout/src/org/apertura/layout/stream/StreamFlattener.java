@@ -1,0 +1,439 @@
+/*
+ * Copyright (c) 2026 Apertura contributors.
+ * SPDX-License-Identifier: EPL-2.0
+ */
+package org.apertura.layout.stream;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Collections;
+import java.util.Deque;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeMap;
+
+import org.apertura.engine.geom.Polygon;
+import org.apertura.layout.LayerKey;
+import org.apertura.layout.PointList;
+import org.apertura.layout.flatten.FlattenOptions;
+import org.apertura.layout.flatten.FlattenResult;
+import org.apertura.layout.flatten.Flattener;
+import org.apertura.layout.flatten.PathOutline;
+import org.apertura.layout.hierarchy.LayoutHierarchyException;
+import org.apertura.layout.model.PathType;
+
+/**
+ * Expands the hierarchy below a cell of a {@link StreamLayout} into per-layer polygons in the top
+ * cell's database units, with the same rules, order, rounding, counters, bounds and exception
+ * messages as {@link Flattener} applied to the EMF model of the same file: for every cell the two give
+ * equal {@link FlattenResult}s.
+ * <p>
+ * Boundaries and boxes become polygons of their vertices (closing vertex dropped), paths their
+ * outline ({@link PathOutline}); texts are left out. Arithmetic is 64-bit and exact for multiples of
+ * 90 degrees with integer magnification, otherwise rounded to the database grid and counted. A depth
+ * above {@link FlattenOptions#maxDepth()}, an output above {@link FlattenOptions#maxVertices()} or a
+ * vertex outside the 32-bit range throws {@link LayoutHierarchyException} naming the cells.
+ */
+public final class StreamFlattener {
+
+    private final StreamLayout layout;
+    private final FlattenOptions options;
+    private final List<List<LocalShape>> localShapes;
+    private final Map<LayerKey, List<Polygon>> out = new TreeMap<>();
+    private final Deque<String> cellPath = new ArrayDeque<>();
+    private long rotated;
+    private long rounded;
+    private long skipped;
+
+    private StreamFlattener(StreamLayout layout, FlattenOptions options) {
+        this.layout = layout;
+        this.options = options;
+        this.localShapes = new ArrayList<>(Collections.nCopies(layout.cells().size(), (List<LocalShape>) null));
+    }
+
+    /** Flattens with {@link FlattenOptions#DEFAULTS}. */
+    public static FlattenResult flatten(StreamLayout layout, StreamCell top) {
+        return flatten(layout, top, FlattenOptions.DEFAULTS);
+    }
+
+    /**
+     * Flattens a cell of the layout and everything it references.
+     *
+     * @throws IllegalArgumentException if the cell is not one of the layout's cells
+     */
+    public static FlattenResult flatten(StreamLayout layout, StreamCell top, FlattenOptions options) {
+        int topIndex = indexOf(layout, top);
+        checkedDepth(layout, topIndex, options.maxDepth());
+        long[] memo = new long[layout.cells().size()];
+        Arrays.fill(memo, -1);
+        long cost = cost(layout, topIndex, options.roundSegments(), memo);
+        if (cost > options.maxVertices()) {
+            throw new LayoutHierarchyException(top.name(), "flattening would give "
+                    + (cost == Long.MAX_VALUE ? "more than 2^63" : Long.toString(cost))
+                    + " vertices and placements, more than the bound of " + options.maxVertices());
+        }
+        StreamFlattener f = new StreamFlattener(layout, options);
+        f.expand(topIndex, Placing.IDENTITY);
+        return new FlattenResult(f.out, f.rotated, f.rounded, f.skipped);
+    }
+
+    private static int indexOf(StreamLayout layout, StreamCell cell) {
+        List<StreamCell> cells = layout.cells();
+        for (int i = 0; i < cells.size(); i++) {
+            if (cells.get(i) == cell) {
+                return i;
+            }
+        }
+        throw new IllegalArgumentException("cell " + cell.name() + " is not part of the layout");
+    }
+
+    /** Distinct children in order of first reference. */
+    private static int[] children(StreamCell cell) {
+        Set<Integer> kids = new LinkedHashSet<>();
+        int[] r = cell.referenceData();
+        for (int i = 0; i < r.length; i += StreamCell.REF_STRIDE) {
+            kids.add(r[i]);
+        }
+        return kids.stream().mapToInt(Integer::intValue).toArray();
+    }
+
+    /**
+     * Hierarchy depth as {@code CellHierarchy.checkedDepth} computes it, iteratively (no cycles: the
+     * reader rejects them).
+     */
+    private static void checkedDepth(StreamLayout layout, int top, int maxDepth) {
+        List<StreamCell> cells = layout.cells();
+        int[] height = new int[cells.size()]; // 0 unknown
+        int[][] kids = new int[cells.size()][];
+        Deque<int[]> stack = new ArrayDeque<>(); // {cell, next child}
+        kids[top] = children(cells.get(top));
+        stack.push(new int[] {top, 0});
+        while (!stack.isEmpty()) {
+            int[] f = stack.peek();
+            int[] k = kids[f[0]];
+            if (f[1] < k.length) {
+                int child = k[f[1]++];
+                if (height[child] == 0) {
+                    if (kids[child] == null) {
+                        kids[child] = children(cells.get(child));
+                    }
+                    stack.push(new int[] {child, 0});
+                }
+            } else {
+                int h = 1;
+                for (int c : k) {
+                    h = Math.max(h, height[c] + 1);
+                }
+                height[f[0]] = h;
+                stack.pop();
+            }
+        }
+        int depth = height[top];
+        if (depth > maxDepth) {
+            List<String> chain = new ArrayList<>();
+            int c = top;
+            while (c >= 0 && chain.size() <= maxDepth) {
+                chain.add(cells.get(c).name());
+                int next = -1;
+                for (int child : kids[c]) {
+                    if (height[child] == height[c] - 1) {
+                        next = child;
+                        break;
+                    }
+                }
+                c = next;
+            }
+            throw new LayoutHierarchyException(String.join("/", chain) + (depth > chain.size() ? "/..." : ""),
+                    "hierarchy is " + depth + " levels deep, more than the bound of " + maxDepth);
+        }
+    }
+
+    /** Output vertices plus placements, saturating; memo holds -1 for unknown. */
+    private static long cost(StreamLayout layout, int cell, int roundSegments, long[] memo) {
+        if (memo[cell] >= 0) {
+            return memo[cell];
+        }
+        StreamCell c = layout.cells().get(cell);
+        long n = 0;
+        int[] d = c.shapeData();
+        int[] r = c.referenceData();
+        // all terms are non-negative, so the saturating sum does not depend on the order
+        int ri = 0;
+        for (int i = c.shapeStart(); i < c.shapeEnd();) {
+            int header = d[i];
+            int kind = StreamCell.kind(header);
+            int points = StreamCell.pointCount(header);
+            if (kind == StreamCell.PATH) {
+                n = saturatingAdd(n, 2L * points + 2L * roundSegments + 4);
+            } else {
+                n = saturatingAdd(n, points);
+            }
+            i += StreamCell.headerSize(kind) + 2 * points;
+        }
+        for (; ri < r.length; ri += StreamCell.REF_STRIDE) {
+            long child = saturatingAdd(cost(layout, r[ri], roundSegments, memo), 1);
+            n = saturatingAdd(n, saturatingMultiply(child, (long) r[ri + 4] * r[ri + 5]));
+        }
+        memo[cell] = n;
+        return n;
+    }
+
+    private static long saturatingAdd(long a, long b) {
+        long r = a + b;
+        return r < 0 ? Long.MAX_VALUE : r;
+    }
+
+    private static long saturatingMultiply(long a, long b) {
+        if (a == 0 || b <= 0) {
+            return 0;
+        }
+        return a > Long.MAX_VALUE / b ? Long.MAX_VALUE : a * b;
+    }
+
+    private void expand(int cellIndex, Placing placing) {
+        StreamCell cell = layout.cells().get(cellIndex);
+        cellPath.addLast(cell.name());
+        for (LocalShape s : shapesOf(cellIndex)) {
+            List<Polygon> list = out.computeIfAbsent(s.layer, k -> new ArrayList<>());
+            if (s.pathType == null) {
+                list.add(Polygon.of(transform(s.vertices, placing)));
+                continue;
+            }
+            long[] centre = transform(s.vertices, placing);
+            int[] placed = new int[centre.length];
+            for (int i = 0; i < centre.length; i++) {
+                placed[i] = (int) centre[i];
+            }
+            long[] outline = PathOutline.outline(PointList.wrap(placed), Math.abs((double) s.width) / 2.0, s.pathType,
+                    s.bgnExtn, s.endExtn, options.roundSegments());
+            if (outline == null) {
+                skipped++;
+            } else {
+                list.add(Polygon.of(outline));
+            }
+        }
+        int[] r = cell.referenceData();
+        double[] t = cell.referenceTransforms();
+        for (int i = 0, k = 0; i < r.length; i += StreamCell.REF_STRIDE, k += 2) {
+            int child = r[i];
+            int x = r[i + 1];
+            int y = r[i + 2];
+            int flags = r[i + 3];
+            if ((flags & StreamCell.ARRAY) != 0) {
+                for (int row = 0; row < r[i + 5]; row++) {
+                    for (int col = 0; col < r[i + 4]; col++) {
+                        double ox = x + (double) col * r[i + 6] + (double) row * r[i + 8];
+                        double oy = y + (double) col * r[i + 7] + (double) row * r[i + 9];
+                        expand(child, placing.then(flags, t[k], t[k + 1], ox, oy));
+                    }
+                }
+            } else {
+                expand(child, placing.then(flags, t[k], t[k + 1], x, y));
+            }
+        }
+        cellPath.removeLast();
+    }
+
+    private long[] transform(long[] local, Placing p) {
+        long[] t = new long[local.length];
+        if (p.exact) {
+            for (int i = 0; i < local.length; i += 2) {
+                long x = local[i];
+                long y = p.reflected ? -local[i + 1] : local[i + 1];
+                x *= p.intMag;
+                y *= p.intMag;
+                long rx;
+                long ry;
+                switch (p.quadrant) {
+                    case 1 -> {
+                        rx = -y;
+                        ry = x;
+                    }
+                    case 2 -> {
+                        rx = -x;
+                        ry = -y;
+                    }
+                    case 3 -> {
+                        rx = y;
+                        ry = -x;
+                    }
+                    default -> {
+                        rx = x;
+                        ry = y;
+                    }
+                }
+                t[i] = checked(rx + p.tx);
+                t[i + 1] = checked(ry + p.ty);
+            }
+            return t;
+        }
+        boolean changed = false;
+        for (int i = 0; i < local.length; i += 2) {
+            double x = local[i] * p.mag;
+            double y = (p.reflected ? -local[i + 1] : local[i + 1]) * p.mag;
+            double rx = x * p.cos - y * p.sin + p.dtx;
+            double ry = x * p.sin + y * p.cos + p.dty;
+            long lx = Math.round(rx);
+            long ly = Math.round(ry);
+            changed |= Math.abs(rx - lx) > 1e-9 || Math.abs(ry - ly) > 1e-9;
+            t[i] = checked(lx, rx);
+            t[i + 1] = checked(ly, ry);
+        }
+        if (p.quadrant < 0) {
+            rotated++;
+        } else if (changed) {
+            rounded++;
+        }
+        return t;
+    }
+
+    private long checked(long v) {
+        if (v < Integer.MIN_VALUE || v > Integer.MAX_VALUE) {
+            throw new LayoutHierarchyException(String.join("/", cellPath),
+                    "coordinate " + v + " outside the 32-bit range after transformation");
+        }
+        return v;
+    }
+
+    private long checked(long v, double raw) {
+        if (!(Math.abs(raw) <= Integer.MAX_VALUE + 1.0)) {
+            throw new LayoutHierarchyException(String.join("/", cellPath),
+                    "coordinate " + raw + " outside the 32-bit range after transformation");
+        }
+        return checked(v);
+    }
+
+    private List<LocalShape> shapesOf(int cellIndex) {
+        List<LocalShape> shapes = localShapes.get(cellIndex);
+        if (shapes != null) {
+            return shapes;
+        }
+        StreamCell cell = layout.cells().get(cellIndex);
+        shapes = new ArrayList<>(cell.shapeCount());
+        int skippedHere = 0;
+        int[] d = cell.shapeData();
+        for (int i = cell.shapeStart(); i < cell.shapeEnd();) {
+            int header = d[i];
+            int kind = StreamCell.kind(header);
+            int points = StreamCell.pointCount(header);
+            LayerKey key = StreamCell.layerKey(d[i + 1]);
+            int xy = i + StreamCell.headerSize(kind);
+            if (kind == StreamCell.PATH) {
+                PathType type = PathType.get(d[i + 2]);
+                int width = d[i + 3];
+                if (width < 0) {
+                    long[] centre = new long[2 * points];
+                    for (int j = 0; j < 2 * points; j++) {
+                        centre[j] = d[xy + j];
+                    }
+                    shapes.add(new LocalShape(key, centre, type, width, d[i + 4], d[i + 5]));
+                } else {
+                    long[] v = PathOutline.outline(PointList.wrap(Arrays.copyOfRange(d, xy, xy + 2 * points)),
+                            Math.abs((double) width) / 2.0, type, d[i + 4], d[i + 5], options.roundSegments());
+                    if (v == null) {
+                        skippedHere++;
+                    } else {
+                        shapes.add(new LocalShape(key, v, null, 0, 0, 0));
+                    }
+                }
+            } else {
+                long[] v = ring(d, xy, points);
+                if (v == null) {
+                    skippedHere++;
+                } else {
+                    shapes.add(new LocalShape(key, v, null, 0, 0, 0));
+                }
+            }
+            i = xy + 2 * points;
+        }
+        localShapes.set(cellIndex, shapes);
+        skipped += skippedHere;
+        return shapes;
+    }
+
+    /** Vertices of a stored ring without the closing vertex, or null with fewer than 3. */
+    private static long[] ring(int[] d, int from, int points) {
+        int n = points;
+        if (n >= 2 && d[from] == d[from + 2 * n - 2] && d[from + 1] == d[from + 2 * n - 1]) {
+            n--;
+        }
+        if (n < 3) {
+            return null;
+        }
+        long[] v = new long[2 * n];
+        for (int i = 0; i < 2 * n; i++) {
+            v[i] = d[from + i];
+        }
+        return v;
+    }
+
+    /**
+     * A shape in its cell's coordinates: polygon vertices, or for a path with an absolute width
+     * ({@code pathType} set) the centre line, outlined after placement.
+     */
+    private record LocalShape(LayerKey layer, long[] vertices, PathType pathType, int width, int bgnExtn,
+            int endExtn) {
+    }
+
+    /** An accumulated placement, computed exactly as the EMF flattener's. */
+    private static final class Placing {
+
+        static final Placing IDENTITY = new Placing(false, 0.0, 1.0, 0.0, 0.0);
+
+        final boolean reflected;
+        final double angle;
+        final double mag;
+        final double dtx;
+        final double dty;
+        final int quadrant;
+        final double cos;
+        final double sin;
+        final boolean exact;
+        final long intMag;
+        final long tx;
+        final long ty;
+
+        Placing(boolean reflected, double angle, double mag, double dtx, double dty) {
+            this.reflected = reflected;
+            double a = angle % 360.0;
+            if (a < 0) {
+                a += 360.0;
+            }
+            this.angle = a;
+            this.mag = mag;
+            this.dtx = dtx;
+            this.dty = dty;
+            double q = a / 90.0;
+            if (q == Math.rint(q)) {
+                quadrant = ((int) q) & 3;
+                cos = new double[] {1, 0, -1, 0}[quadrant];
+                sin = new double[] {0, 1, 0, -1}[quadrant];
+            } else {
+                quadrant = -1;
+                cos = Math.cos(Math.toRadians(a));
+                sin = Math.sin(Math.toRadians(a));
+            }
+            boolean integralMag = mag == Math.rint(mag) && mag >= 1 && mag <= 1 << 20;
+            boolean integralT = dtx == Math.rint(dtx) && dty == Math.rint(dty) && Math.abs(dtx) < 1L << 52
+                    && Math.abs(dty) < 1L << 52;
+            exact = quadrant >= 0 && integralMag && integralT;
+            intMag = exact ? (long) mag : 0;
+            tx = exact ? (long) dtx : 0;
+            ty = exact ? (long) dty : 0;
+        }
+
+        Placing then(int flags, double childMag, double childAngle, double ox, double oy) {
+            double x = ox * mag;
+            double y = (reflected ? -oy : oy) * mag;
+            double nx = x * cos - y * sin + dtx;
+            double ny = x * sin + y * cos + dty;
+            double a = (flags & StreamCell.ABSOLUTE_ANGLE) != 0 ? childAngle
+                    : angle + (reflected ? -childAngle : childAngle);
+            double m = (flags & StreamCell.ABSOLUTE_MAG) != 0 ? childMag : mag * childMag;
+            return new Placing(reflected ^ (flags & StreamCell.REFLECTED) != 0, a, m, nx, ny);
+        }
+    }
+}
