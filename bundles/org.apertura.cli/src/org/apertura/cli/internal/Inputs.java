@@ -15,6 +15,8 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 import org.apertura.layout.gds.GdsFormatException;
 import org.apertura.migrate.layout.LayoutLayers;
@@ -178,12 +180,51 @@ public final class Inputs {
     public static List<InputFile> hashes(WaiverInput waivers, Object... roleAndPath) throws InputException {
         List<InputFile> out = new ArrayList<>();
         for (int i = 0; i < roleAndPath.length; i += 2) {
-            out.add(hash((String) roleAndPath[i], (Path) roleAndPath[i + 1]));
+            String role = (String) roleAndPath[i];
+            Path file = (Path) roleAndPath[i + 1];
+            out.add(hash(role, file));
+            if (role.equals("deck")) {
+                for (Path imported : deckImports(file)) {
+                    out.add(hash("deck import", imported));
+                }
+            }
         }
         if (waivers.file().isPresent()) {
             out.add(hash("waivers", waivers.file().get()));
         }
         return out;
+    }
+
+    private static final Pattern IMPORT = Pattern.compile("(?m)^\\s*import\\s+\"([^\"]+)\"");
+
+    /**
+     * The files a deck imports, directly or through other imports, in the order first met; each path
+     * resolved against the importing file's folder, as the deck loader does. A deck that loaded has
+     * every import in place, so unreadable files are left to the loader's own error.
+     */
+    static List<Path> deckImports(Path deck) {
+        Set<Path> seen = new LinkedHashSet<>();
+        java.util.ArrayDeque<Path> todo = new java.util.ArrayDeque<>();
+        Path start = deck.toAbsolutePath().normalize();
+        todo.add(start);
+        while (!todo.isEmpty()) {
+            Path file = todo.poll();
+            String text;
+            try {
+                text = Files.readString(file);
+            } catch (IOException e) {
+                continue;
+            }
+            Matcher m = IMPORT.matcher(text);
+            while (m.find()) {
+                Path parent = file.getParent();
+                Path imported = (parent == null ? Path.of(m.group(1)) : parent.resolve(m.group(1))).normalize();
+                if (!imported.equals(start) && Files.isRegularFile(imported) && seen.add(imported)) {
+                    todo.add(imported);
+                }
+            }
+        }
+        return List.copyOf(seen);
     }
 
     /** The first line of a message, so that every error stays one line. */

@@ -167,6 +167,9 @@ class MigrateCommandTest {
         }
         assertEquals(org.apertura.report.model.InputFile.hash("deck", Cli.deck()).sha256(), hashes.get("deck"));
         assertEquals(org.apertura.report.model.InputFile.hash("layout", Cli.layout()).sha256(), hashes.get("layout"));
+        // the sample deck imports its layer table: that file is an input too
+        java.nio.file.Path layers = Cli.deck().resolveSibling("meridian-layers.apdeck");
+        assertEquals(org.apertura.report.model.InputFile.hash("deck import", layers).sha256(), hashes.get("deck import"));
         assertEquals("migrate", Cli.str(((JsonValue.Arr) Cli.get(json, "provenance", "command")).items().get(0)));
     }
 
