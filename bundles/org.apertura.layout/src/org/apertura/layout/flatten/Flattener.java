@@ -52,8 +52,7 @@ public final class Flattener {
     private final Map<Cell, List<LocalShape>> localShapes = new IdentityHashMap<>();
     private final Map<LayerKey, List<Polygon>> out = new TreeMap<>();
     private final Deque<String> cellPath = new ArrayDeque<>();
-    private long rotated;
-    private long rounded;
+    private final Placing.Tally tally = new Placing.Tally();
     private long skipped;
 
     private Flattener(FlattenOptions options) {
@@ -76,7 +75,7 @@ public final class Flattener {
         }
         Flattener f = new Flattener(options);
         f.expand(top, Placing.IDENTITY);
-        return new FlattenResult(f.out, f.rotated, f.rounded, f.skipped);
+        return new FlattenResult(f.out, f.tally.rotated(), f.tally.rounded(), f.skipped);
     }
 
     /**
@@ -126,12 +125,12 @@ public final class Flattener {
         for (LocalShape s : shapesOf(cell)) {
             List<Polygon> list = out.computeIfAbsent(s.layer, k -> new ArrayList<>());
             if (s.absolutePath == null) {
-                list.add(Polygon.of(transform(s.vertices, placing)));
+                list.add(Polygon.of(placing.apply(s.vertices, cellPath, tally)));
                 continue;
             }
             // absolute width: place the centre line, then draw the outline at the stored width
             Path path = s.absolutePath;
-            long[] centre = transform(s.vertices, placing);
+            long[] centre = placing.apply(s.vertices, cellPath, tally);
             int[] placed = new int[centre.length];
             for (int i = 0; i < centre.length; i++) {
                 placed[i] = (int) centre[i];
@@ -158,75 +157,6 @@ public final class Flattener {
             }
         }
         cellPath.removeLast();
-    }
-
-    private long[] transform(long[] local, Placing p) {
-        long[] t = new long[local.length];
-        if (p.exact) {
-            for (int i = 0; i < local.length; i += 2) {
-                long x = local[i];
-                long y = p.reflected ? -local[i + 1] : local[i + 1];
-                x *= p.intMag;
-                y *= p.intMag;
-                long rx;
-                long ry;
-                switch (p.quadrant) {
-                    case 1 -> {
-                        rx = -y;
-                        ry = x;
-                    }
-                    case 2 -> {
-                        rx = -x;
-                        ry = -y;
-                    }
-                    case 3 -> {
-                        rx = y;
-                        ry = -x;
-                    }
-                    default -> {
-                        rx = x;
-                        ry = y;
-                    }
-                }
-                t[i] = checked(rx + p.tx);
-                t[i + 1] = checked(ry + p.ty);
-            }
-            return t;
-        }
-        boolean changed = false;
-        for (int i = 0; i < local.length; i += 2) {
-            double x = local[i] * p.mag;
-            double y = (p.reflected ? -local[i + 1] : local[i + 1]) * p.mag;
-            double rx = x * p.cos - y * p.sin + p.dtx;
-            double ry = x * p.sin + y * p.cos + p.dty;
-            long lx = Math.round(rx);
-            long ly = Math.round(ry);
-            changed |= Math.abs(rx - lx) > 1e-9 || Math.abs(ry - ly) > 1e-9;
-            t[i] = checked(lx, rx);
-            t[i + 1] = checked(ly, ry);
-        }
-        if (p.quadrant < 0) {
-            rotated++;
-        } else if (changed) {
-            rounded++;
-        }
-        return t;
-    }
-
-    private long checked(long v) {
-        if (v < Integer.MIN_VALUE || v > Integer.MAX_VALUE) {
-            throw new LayoutHierarchyException(String.join("/", cellPath),
-                    "coordinate " + v + " outside the 32-bit range after transformation");
-        }
-        return v;
-    }
-
-    private long checked(long v, double raw) {
-        if (!(Math.abs(raw) <= Integer.MAX_VALUE + 1.0)) {
-            throw new LayoutHierarchyException(String.join("/", cellPath),
-                    "coordinate " + raw + " outside the 32-bit range after transformation");
-        }
-        return checked(v);
     }
 
     private List<LocalShape> shapesOf(Cell cell) {

@@ -22,6 +22,7 @@ import org.apertura.layout.flatten.FlattenOptions;
 import org.apertura.layout.flatten.FlattenResult;
 import org.apertura.layout.flatten.Flattener;
 import org.apertura.layout.flatten.PathOutline;
+import org.apertura.layout.flatten.Placing;
 import org.apertura.layout.hierarchy.LayoutHierarchyException;
 import org.apertura.layout.model.PathType;
 
@@ -44,8 +45,7 @@ public final class StreamFlattener {
     private final List<List<LocalShape>> localShapes;
     private final Map<LayerKey, List<Polygon>> out = new TreeMap<>();
     private final Deque<String> cellPath = new ArrayDeque<>();
-    private long rotated;
-    private long rounded;
+    private final Placing.Tally tally = new Placing.Tally();
     private long skipped;
 
     private StreamFlattener(StreamLayout layout, FlattenOptions options) {
@@ -77,7 +77,7 @@ public final class StreamFlattener {
         }
         StreamFlattener f = new StreamFlattener(layout, options);
         f.expand(topIndex, Placing.IDENTITY);
-        return new FlattenResult(f.out, f.rotated, f.rounded, f.skipped);
+        return new FlattenResult(f.out, f.tally.rotated(), f.tally.rounded(), f.skipped);
     }
 
     private static int indexOf(StreamLayout layout, StreamCell cell) {
@@ -199,10 +199,10 @@ public final class StreamFlattener {
         for (LocalShape s : shapesOf(cellIndex)) {
             List<Polygon> list = out.computeIfAbsent(s.layer, k -> new ArrayList<>());
             if (s.pathType == null) {
-                list.add(Polygon.of(transform(s.vertices, placing)));
+                list.add(Polygon.of(placing.apply(s.vertices, cellPath, tally)));
                 continue;
             }
-            long[] centre = transform(s.vertices, placing);
+            long[] centre = placing.apply(s.vertices, cellPath, tally);
             int[] placed = new int[centre.length];
             for (int i = 0; i < centre.length; i++) {
                 placed[i] = (int) centre[i];
@@ -227,83 +227,19 @@ public final class StreamFlattener {
                     for (int col = 0; col < r[i + 4]; col++) {
                         double ox = x + (double) col * r[i + 6] + (double) row * r[i + 8];
                         double oy = y + (double) col * r[i + 7] + (double) row * r[i + 9];
-                        expand(child, placing.then(flags, t[k], t[k + 1], ox, oy));
+                        expand(child, then(placing, flags, t[k], t[k + 1], ox, oy));
                     }
                 }
             } else {
-                expand(child, placing.then(flags, t[k], t[k + 1], x, y));
+                expand(child, then(placing, flags, t[k], t[k + 1], x, y));
             }
         }
         cellPath.removeLast();
     }
 
-    private long[] transform(long[] local, Placing p) {
-        long[] t = new long[local.length];
-        if (p.exact) {
-            for (int i = 0; i < local.length; i += 2) {
-                long x = local[i];
-                long y = p.reflected ? -local[i + 1] : local[i + 1];
-                x *= p.intMag;
-                y *= p.intMag;
-                long rx;
-                long ry;
-                switch (p.quadrant) {
-                    case 1 -> {
-                        rx = -y;
-                        ry = x;
-                    }
-                    case 2 -> {
-                        rx = -x;
-                        ry = -y;
-                    }
-                    case 3 -> {
-                        rx = y;
-                        ry = -x;
-                    }
-                    default -> {
-                        rx = x;
-                        ry = y;
-                    }
-                }
-                t[i] = checked(rx + p.tx);
-                t[i + 1] = checked(ry + p.ty);
-            }
-            return t;
-        }
-        boolean changed = false;
-        for (int i = 0; i < local.length; i += 2) {
-            double x = local[i] * p.mag;
-            double y = (p.reflected ? -local[i + 1] : local[i + 1]) * p.mag;
-            double rx = x * p.cos - y * p.sin + p.dtx;
-            double ry = x * p.sin + y * p.cos + p.dty;
-            long lx = Math.round(rx);
-            long ly = Math.round(ry);
-            changed |= Math.abs(rx - lx) > 1e-9 || Math.abs(ry - ly) > 1e-9;
-            t[i] = checked(lx, rx);
-            t[i + 1] = checked(ly, ry);
-        }
-        if (p.quadrant < 0) {
-            rotated++;
-        } else if (changed) {
-            rounded++;
-        }
-        return t;
-    }
-
-    private long checked(long v) {
-        if (v < Integer.MIN_VALUE || v > Integer.MAX_VALUE) {
-            throw new LayoutHierarchyException(String.join("/", cellPath),
-                    "coordinate " + v + " outside the 32-bit range after transformation");
-        }
-        return v;
-    }
-
-    private long checked(long v, double raw) {
-        if (!(Math.abs(raw) <= Integer.MAX_VALUE + 1.0)) {
-            throw new LayoutHierarchyException(String.join("/", cellPath),
-                    "coordinate " + raw + " outside the 32-bit range after transformation");
-        }
-        return checked(v);
+    private static Placing then(Placing placing, int flags, double childMag, double childAngle, double ox, double oy) {
+        return placing.then((flags & StreamCell.REFLECTED) != 0, childAngle, (flags & StreamCell.ABSOLUTE_ANGLE) != 0,
+                childMag, (flags & StreamCell.ABSOLUTE_MAG) != 0, ox, oy);
     }
 
     private List<LocalShape> shapesOf(int cellIndex) {
@@ -376,64 +312,5 @@ public final class StreamFlattener {
      */
     private record LocalShape(LayerKey layer, long[] vertices, PathType pathType, int width, int bgnExtn,
             int endExtn) {
-    }
-
-    /** An accumulated placement, computed exactly as the EMF flattener's. */
-    private static final class Placing {
-
-        static final Placing IDENTITY = new Placing(false, 0.0, 1.0, 0.0, 0.0);
-
-        final boolean reflected;
-        final double angle;
-        final double mag;
-        final double dtx;
-        final double dty;
-        final int quadrant;
-        final double cos;
-        final double sin;
-        final boolean exact;
-        final long intMag;
-        final long tx;
-        final long ty;
-
-        Placing(boolean reflected, double angle, double mag, double dtx, double dty) {
-            this.reflected = reflected;
-            double a = angle % 360.0;
-            if (a < 0) {
-                a += 360.0;
-            }
-            this.angle = a;
-            this.mag = mag;
-            this.dtx = dtx;
-            this.dty = dty;
-            double q = a / 90.0;
-            if (q == Math.rint(q)) {
-                quadrant = ((int) q) & 3;
-                cos = new double[] {1, 0, -1, 0}[quadrant];
-                sin = new double[] {0, 1, 0, -1}[quadrant];
-            } else {
-                quadrant = -1;
-                cos = Math.cos(Math.toRadians(a));
-                sin = Math.sin(Math.toRadians(a));
-            }
-            boolean integralMag = mag == Math.rint(mag) && mag >= 1 && mag <= 1 << 20;
-            boolean integralT = dtx == Math.rint(dtx) && dty == Math.rint(dty) && Math.abs(dtx) < 1L << 52
-                    && Math.abs(dty) < 1L << 52;
-            exact = quadrant >= 0 && integralMag && integralT;
-            intMag = exact ? (long) mag : 0;
-            tx = exact ? (long) dtx : 0;
-            ty = exact ? (long) dty : 0;
-        }
-
-        Placing then(int flags, double childMag, double childAngle, double ox, double oy) {
-            double x = ox * mag;
-            double y = (reflected ? -oy : oy) * mag;
-            double nx = x * cos - y * sin + dtx;
-            double ny = x * sin + y * cos + dty;
-            double a = (flags & StreamCell.ABSOLUTE_ANGLE) != 0 ? childAngle
-                    : angle + (reflected ? -childAngle : childAngle);
-            double m = (flags & StreamCell.ABSOLUTE_MAG) != 0 ? childMag : mag * childMag;
-            return new Placing(reflected ^ (flags & StreamCell.REFLECTED) != 0, a, m, nx, ny);
-        }
     }
 }
