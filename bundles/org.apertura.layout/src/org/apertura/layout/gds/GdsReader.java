@@ -186,7 +186,7 @@ public final class GdsReader {
                 cellOffsets.put(cell, start);
             } else if (type == GdsRecordType.ENDSTR.code()) {
                 break;
-            } else if (isElementStart(type)) {
+            } else if (GdsRecordType.isElementStart(type)) {
                 if (cell.getName() == null) {
                     throw in.error(GdsRecordType.nameOf(type) + " element in a structure without STRNAME");
                 }
@@ -203,11 +203,6 @@ public final class GdsReader {
         }
         ((InternalEList<Element>) cell.getElements()).addAllUnique(elements);
         return cell;
-    }
-
-    private static boolean isElementStart(int type) {
-        return type == 0x08 || type == 0x09 || type == 0x0A || type == 0x0B || type == 0x0C || type == 0x2D
-                || type == 0x15 || type == 0x14;
     }
 
     /** Reads one element; returns null for element kinds the model does not hold (NODE, TEXTNODE). */
@@ -247,7 +242,7 @@ public final class GdsReader {
                 break;
             }
             if (!modelled) {
-                if (isElementStart(type) || type == 0x07 || type == 0x04 || type == 0x05) {
+                if (GdsRecordType.isElementStart(type) || type == 0x07 || type == 0x04 || type == 0x05) {
                     throw in.error(GdsRecordType.nameOf(type) + " before ENDEL of the " + kindName
                             + " element started at byte " + start);
                 }
@@ -260,7 +255,7 @@ public final class GdsReader {
                 }
                 case 0x0E, 0x16, 0x2E -> { // DATATYPE, TEXTTYPE, BOXTYPE
                     GdsRecordType t = GdsRecordType.ofCode(type);
-                    if (t != expectedTypeRecord(kind)) {
+                    if (t != GdsRecordType.typeRecordOf(kind)) {
                         misplaced(t, kindName);
                     } else {
                         check(t, 2);
@@ -392,7 +387,7 @@ public final class GdsReader {
                     pendingAttr = Integer.MIN_VALUE;
                 }
                 default -> {
-                    if (isElementStart(type) || type == 0x07 || type == 0x04 || type == 0x05 || type == 0x06) {
+                    if (GdsRecordType.isElementStart(type) || type == 0x07 || type == 0x04 || type == 0x05 || type == 0x06) {
                         throw in.error(GdsRecordType.nameOf(type) + " before ENDEL of the " + kindName
                                 + " element started at byte " + start);
                     }
@@ -492,15 +487,6 @@ public final class GdsReader {
             ((InternalEList<Property>) element.getProperties()).addAllUnique(properties);
         }
         return element;
-    }
-
-    private static GdsRecordType expectedTypeRecord(int kind) {
-        return switch (kind) {
-            case 0x08, 0x09 -> GdsRecordType.DATATYPE;
-            case 0x0C -> GdsRecordType.TEXTTYPE;
-            case 0x2D -> GdsRecordType.BOXTYPE;
-            default -> null;
-        };
     }
 
     private int pitch(long span, int count) {

@@ -117,4 +117,26 @@ public enum GdsRecordType {
         GdsRecordType t = ofCode(code);
         return t != null ? t.name() : String.format("0x%02X", code & 0xFF);
     }
+
+    /**
+     * Whether a record type opens an element: BOUNDARY, PATH, SREF, AREF, TEXT, BOX, or the
+     * tape-era NODE (0x15) and TEXTNODE (0x14) elements, which readers skip whole.
+     */
+    public static boolean isElementStart(int code) {
+        return code == 0x08 || code == 0x09 || code == 0x0A || code == 0x0B || code == 0x0C || code == 0x2D
+                || code == 0x15 || code == 0x14;
+    }
+
+    /**
+     * The record that carries the second half of an element's layer key: DATATYPE for boundaries and
+     * paths, TEXTTYPE for texts, BOXTYPE for boxes; null for elements without one.
+     */
+    public static GdsRecordType typeRecordOf(int elementCode) {
+        return switch (elementCode) {
+            case 0x08, 0x09 -> DATATYPE;
+            case 0x0C -> TEXTTYPE;
+            case 0x2D -> BOXTYPE;
+            default -> null;
+        };
+    }
 }

@@ -352,7 +352,7 @@ public final class GdsStreamReader {
                 names.define(id, start);
             } else if (type == 0x07) { // ENDSTR
                 break;
-            } else if (isElementStart(type)) {
+            } else if (GdsRecordType.isElementStart(type)) {
                 if (id < 0) {
                     throw error(GdsRecordType.nameOf(type) + " element in a structure without STRNAME");
                 }
@@ -370,11 +370,6 @@ public final class GdsStreamReader {
                 Arrays.copyOf(refs, refCount * StreamCell.REF_STRIDE), Arrays.copyOf(refTransforms, refCount * 2),
                 textCount));
         cellIds.add(id);
-    }
-
-    private static boolean isElementStart(int type) {
-        return type == 0x08 || type == 0x09 || type == 0x0A || type == 0x0B || type == 0x0C || type == 0x2D
-                || type == 0x15 || type == 0x14;
     }
 
     /**
@@ -416,7 +411,7 @@ public final class GdsStreamReader {
                 break;
             }
             if (!modelled) {
-                if (isElementStart(type) || type == 0x07 || type == 0x04 || type == 0x05) {
+                if (GdsRecordType.isElementStart(type) || type == 0x07 || type == 0x04 || type == 0x05) {
                     throw error(GdsRecordType.nameOf(type) + " before ENDEL of the " + GdsRecordType.nameOf(kind)
                             + " element started at byte " + start);
                 }
@@ -429,7 +424,7 @@ public final class GdsStreamReader {
                 }
                 case 0x0E, 0x16, 0x2E -> { // DATATYPE, TEXTTYPE, BOXTYPE
                     GdsRecordType t = GdsRecordType.ofCode(type);
-                    if (t != expectedTypeRecord(kind)) {
+                    if (t != GdsRecordType.typeRecordOf(kind)) {
                         misplaced(t, kind);
                     } else {
                         check(t, 2);
@@ -558,7 +553,7 @@ public final class GdsStreamReader {
                     pendingAttr = false;
                 }
                 default -> {
-                    if (isElementStart(type) || type == 0x07 || type == 0x04 || type == 0x05 || type == 0x06) {
+                    if (GdsRecordType.isElementStart(type) || type == 0x07 || type == 0x04 || type == 0x05 || type == 0x06) {
                         throw error(GdsRecordType.nameOf(type) + " before ENDEL of the " + GdsRecordType.nameOf(kind)
                                 + " element started at byte " + start);
                     }
@@ -790,15 +785,6 @@ public final class GdsStreamReader {
         for (int i = 0; i < values; i++, p += 4) {
             target[at + i] = b.getInt(p);
         }
-    }
-
-    private static GdsRecordType expectedTypeRecord(int kind) {
-        return switch (kind) {
-            case 0x08, 0x09 -> GdsRecordType.DATATYPE;
-            case 0x0C -> GdsRecordType.TEXTTYPE;
-            case 0x2D -> GdsRecordType.BOXTYPE;
-            default -> null;
-        };
     }
 
     private int pitch(long span, int count) {
