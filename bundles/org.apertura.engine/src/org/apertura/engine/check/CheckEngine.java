@@ -9,7 +9,9 @@ import java.util.Arrays;
 import java.util.Collection;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.TreeMap;
+import java.util.TreeSet;
 
 import org.apertura.engine.colour.ConflictGraph;
 import org.apertura.engine.colour.Decomposition;
@@ -95,7 +97,24 @@ public final class CheckEngine {
     }
 
     private static List<Violation> checkMerged(Map<String, MergedLayer> layers, List<? extends Rule> rules, Exec exec) {
+        // the indexes of all layers searched by edge pairs, built in parallel (one layer per thread)
+        Set<String> searched = new TreeSet<>();
+        for (Rule rule : rules) {
+            layer(layers, rule.layer(), rule);
+            if (rule instanceof EnclosureRule r) {
+                layer(layers, r.outerLayer(), rule);
+                searched.add(r.outerLayer());
+            } else if (!(rule instanceof AreaRule || rule instanceof DensityRule)) {
+                searched.add(rule.layer());
+            }
+        }
+        List<String> names = new ArrayList<>(searched);
+        exec.expect(names.size());
+        List<EdgeIndex> built = exec.map(names.size(), i -> List.of(new EdgeIndex(layers.get(names.get(i)))));
         Map<String, EdgeIndex> indexes = new TreeMap<>();
+        for (int i = 0; i < names.size(); i++) {
+            indexes.put(names.get(i), built.get(i));
+        }
         List<Violation> all = new ArrayList<>();
         for (Rule rule : rules) {
             exec.checkCancelled();
@@ -136,13 +155,13 @@ public final class CheckEngine {
         for (MergedLayer layer : layers.values()) {
             EdgeIndex index = new EdgeIndex(layer);
             List<Object[]> found = new ArrayList<>();
-            found.addAll(PairSearch.run(layer, layer, index, range, -1, exec, (e, f, p, out) -> {
+            found.addAll(PairSearch.run(layer, index, range, -1, exec, (e, f, p, out) -> {
                 if (layer.shapeOf(e) == layer.shapeOf(f) && !shadowed(layer, index, e, f, p, EdgeIndex.buffer())) {
                     out.add(new Object[] {MeasureKind.WIDTH, axis(layer, e, p), extreme(layer, e, f, p, p.distance)});
                 }
             }));
             double[] widths = edgeWidths(layer, index, range, exec);
-            found.addAll(PairSearch.run(layer, layer, index, range, 1, exec, (e, f, p, out) -> {
+            found.addAll(PairSearch.run(layer, index, range, 1, exec, (e, f, p, out) -> {
                 if (shadowed(layer, index, e, f, p, EdgeIndex.buffer())) {
                     return;
                 }
@@ -255,7 +274,7 @@ public final class CheckEngine {
 
     private static List<Violation> width(MergedLayer layer, EdgeIndex index, WidthRule r, Exec exec) {
         boolean euclid = r.metric() == Metric.EUCLIDEAN;
-        return PairSearch.run(layer, layer, index, r.minimum().max(), -1, exec, (e, f, p, out) -> {
+        return PairSearch.run(layer, index, r.minimum().max(), -1, exec, (e, f, p, out) -> {
             if (layer.shapeOf(e) != layer.shapeOf(f) || (!euclid && p.type != FacingPair.RUN)) {
                 return;
             }
@@ -273,7 +292,7 @@ public final class CheckEngine {
     static double[] edgeWidths(MergedLayer layer, EdgeIndex index, long cap, Exec exec) {
         double[] w = new double[layer.edgeCount()];
         Arrays.fill(w, cap);
-        List<double[]> found = PairSearch.run(layer, layer, index, cap, -1, exec, (e, f, p, out) -> {
+        List<double[]> found = PairSearch.run(layer, index, cap, -1, exec, (e, f, p, out) -> {
             if (p.type == FacingPair.RUN && layer.shapeOf(e) == layer.shapeOf(f)) {
                 out.add(new double[] {e, f, p.distance});
             }
@@ -292,7 +311,7 @@ public final class CheckEngine {
         boolean euclid = r.metric() == Metric.EUCLIDEAN;
         double[] widths = r.table().isPresent()
                 ? edgeWidths(layer, index, r.table().get().widestThreshold(), exec) : null;
-        return PairSearch.run(layer, layer, index, r.reach(), 1, exec, (e, f, p, out) -> {
+        return PairSearch.run(layer, index, r.reach(), 1, exec, (e, f, p, out) -> {
             if (!euclid && p.type != FacingPair.RUN) {
                 return;
             }
@@ -316,7 +335,7 @@ public final class CheckEngine {
     private static List<Violation> pitch(MergedLayer layer, EdgeIndex index, PitchRule r, Exec exec) {
         double[] widths = edgeWidths(layer, index, r.minimum(), exec);
         boolean horizontal = r.preferred() == Direction.HORIZONTAL;
-        return PairSearch.run(layer, layer, index, r.minimum(), 1, exec, (e, f, p, out) -> {
+        return PairSearch.run(layer, index, r.minimum(), 1, exec, (e, f, p, out) -> {
             if (p.type != FacingPair.RUN || layer.shapeOf(e) == layer.shapeOf(f)) {
                 return;
             }
@@ -351,7 +370,7 @@ public final class CheckEngine {
     }
 
     private static List<Violation> endOfLine(MergedLayer layer, EdgeIndex index, EndOfLineRule r, Exec exec) {
-        return PairSearch.run(layer, layer, index, r.reach(), 1, exec, (e, f, p, out) -> {
+        return PairSearch.run(layer, index, r.reach(), 1, exec, (e, f, p, out) -> {
             if (p.type != FacingPair.RUN) {
                 return;
             }

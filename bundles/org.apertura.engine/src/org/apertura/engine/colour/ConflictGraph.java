@@ -71,7 +71,7 @@ public final class ConflictGraph {
 
     /** The conflict graph of a layer's merged shapes at {@code distance} database units. */
     public static ConflictGraph build(MergedLayer layer, EdgeIndex index, long distance, Exec exec) {
-        List<Edge> found = PairSearch.run(layer, layer, index, distance, 1, exec, (e, f, p, out) -> {
+        List<Edge> found = PairSearch.run(layer, index, distance, 1, exec, (e, f, p, out) -> {
             int a = layer.shapeOf(e), b = layer.shapeOf(f);
             if (a != b) {
                 out.add(new Edge(Math.min(a, b), Math.max(a, b), p.distance));

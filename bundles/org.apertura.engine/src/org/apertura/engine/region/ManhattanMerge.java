@@ -37,6 +37,20 @@ final class ManhattanMerge {
     }
 
     MergedLayer run() {
+        Rings r = rings();
+        return new MergedLayer(name, r.xy(), r.ringStart(), r.ringShape(), r.shapes(), true);
+    }
+
+    /**
+     * Boundary rings in sweep order: ring r holds edges ringStart[r] .. ringStart[r + 1] - 1 (four
+     * coordinates each in xy), starts with its first vertical edge in sweep order (by x, right-facing
+     * before left-facing, then by lower y) and belongs to shape ringShape[r]; shapes are numbered in
+     * the order of their first ring.
+     */
+    record Rings(long[] xy, int[] ringStart, int[] ringShape, int shapes) {
+    }
+
+    Rings rings() {
         // 1. vertical edges of the input with their coverage change
         int count = 0;
         for (Polygon p : polygons) {
@@ -78,7 +92,7 @@ final class ManhattanMerge {
             }
         }
         if (m == 0) {
-            return new MergedLayer(name, new long[0], new int[] {0}, new int[0], 0, true);
+            return new Rings(new long[0], new int[] {0}, new int[0], 0);
         }
         Arrays.sort(yAll, 0, yc);
         int u = 0;
@@ -281,7 +295,7 @@ final class ManhattanMerge {
     }
 
     /** Links the vertical boundary edges into rings and groups rings into shapes. */
-    private MergedLayer link() {
+    private Rings link() {
         int n = vn;
         // endpoints 2k (bottom) and 2k+1 (top), bucketed by y rank in sweep order (stable)
         int[] start = new int[ys.length + 1];
@@ -352,10 +366,7 @@ final class ManhattanMerge {
         }
         ringStart[rings] = e;
         // shapes: a ring whose first (leftmost) vertical edge is right-facing is a hole
-        int[] parent = new int[rings];
-        for (int r = 0; r < rings; r++) {
-            parent[r] = r;
-        }
+        int[] parent = UnionFind.singletons(rings);
         boolean anyHole = false;
         for (int r = 0; r < rings; r++) {
             if (vup[ringFirstV[r]]) {
@@ -371,14 +382,13 @@ final class ManhattanMerge {
         int[] ringShape = new int[rings];
         int shapes = 0;
         for (int r = 0; r < rings; r++) {
-            int root = find(parent, r);
+            int root = UnionFind.find(parent, r);
             if (shapeOfRoot[root] < 0) {
                 shapeOfRoot[root] = shapes++;
             }
             ringShape[r] = shapeOfRoot[root];
         }
-        return new MergedLayer(name, Arrays.copyOf(xy, 4 * e), Arrays.copyOf(ringStart, rings + 1), ringShape,
-                shapes, true);
+        return new Rings(Arrays.copyOf(xy, 4 * e), Arrays.copyOf(ringStart, rings + 1), ringShape, shapes);
     }
 
     /** Second sweep: each hole joins the ring of the nearest boundary edge to its left. */
@@ -398,7 +408,7 @@ final class ManhattanMerge {
                 if (left < 0) {
                     throw new IllegalStateException("hole without enclosing edge in layer " + name);
                 }
-                union(parent, ringOfV[k], ringOfV[left]);
+                UnionFind.union(parent, ringOfV[k], ringOfV[left]);
             }
             assignRange(assign, 1, 0, leaves, vlo[k], vhi[k], k);
         }
@@ -447,22 +457,5 @@ final class ManhattanMerge {
         assignRange(t, 2 * node + 1, mid, nr, l, h, v);
     }
 
-    private static int find(int[] p, int a) {
-        while (p[a] != a) {
-            p[a] = p[p[a]];
-            a = p[a];
-        }
-        return a;
-    }
 
-    private static void union(int[] p, int a, int b) {
-        int ra = find(p, a), rb = find(p, b);
-        if (ra != rb) {
-            if (ra < rb) {
-                p[rb] = ra;
-            } else {
-                p[ra] = rb;
-            }
-        }
-    }
 }

@@ -40,10 +40,13 @@ public final class RegionMerger {
         for (Polygon p : polygons) {
             (p.isManhattan() ? manhattan : other).add(p);
         }
-        MergedLayer m = new ManhattanMerge(name, manhattan).run();
+        ClusteredMerge clustered = new ClusteredMerge(name, manhattan, other);
+        MergedLayer m = clustered.layer();
         if (other.isEmpty()) {
             return m;
         }
+        // only shapes grouped with a non-Manhattan polygon can touch one
+        boolean[] candidate = clustered.nearShapes();
         GeometryFactory gf = new GeometryFactory(new PrecisionModel(1.0));
         org.locationtech.jts.index.strtree.STRtree tree = new org.locationtech.jts.index.strtree.STRtree();
         // mixed: the non-Manhattan polygons first, then the scanline shapes touching one of them
@@ -53,14 +56,14 @@ public final class RegionMerger {
             tree.insert(g.getEnvelopeInternal(), mixed.size());
             mixed.add(g);
         }
-        int[] parent = new int[other.size()];
-        for (int i = 0; i < parent.length; i++) {
-            parent[i] = i;
-        }
+        int[] parent = UnionFind.singletons(other.size());
         List<Integer> near = new ArrayList<>();
         org.locationtech.jts.geom.Envelope env = new org.locationtech.jts.geom.Envelope();
         boolean[] drop = new boolean[m.shapeCount()];
         for (int s = 0; s < m.shapeCount(); s++) {
+            if (!candidate[s]) {
+                continue;
+            }
             org.apertura.engine.geom.Box b = m.bounds(s);
             env.init(b.minX(), b.maxX(), b.minY(), b.maxY());
             near.clear();
@@ -78,7 +81,7 @@ public final class RegionMerger {
                         mixed.add(shape);
                         parent = grow(parent, id);
                     }
-                    union(parent, id, o);
+                    UnionFind.union(parent, id, o);
                 }
             }
         }
@@ -86,8 +89,8 @@ public final class RegionMerger {
             near.clear();
             tree.query(mixed.get(i).getEnvelopeInternal(), item -> near.add((Integer) item));
             for (int j : near) {
-                if (j > i && find(parent, i) != find(parent, j) && mixed.get(i).intersects(mixed.get(j))) {
-                    union(parent, i, j);
+                if (j > i && UnionFind.find(parent, i) != UnionFind.find(parent, j) && mixed.get(i).intersects(mixed.get(j))) {
+                    UnionFind.union(parent, i, j);
                 }
             }
         }
@@ -95,7 +98,7 @@ public final class RegionMerger {
         // of them costs far more (its snap-rounding noder sees every segment at once)
         int[] count = new int[mixed.size() + 1];
         for (int i = 0; i < mixed.size(); i++) {
-            count[find(parent, i) + 1]++;
+            count[UnionFind.find(parent, i) + 1]++;
         }
         for (int i = 0; i < mixed.size(); i++) {
             count[i + 1] += count[i];
@@ -103,7 +106,7 @@ public final class RegionMerger {
         Geometry[] byCluster = new Geometry[mixed.size()];
         int[] fill = Arrays.copyOf(count, mixed.size());
         for (int i = 0; i < mixed.size(); i++) {
-            byCluster[fill[find(parent, i)]++] = mixed.get(i);
+            byCluster[fill[UnionFind.find(parent, i)]++] = mixed.get(i);
         }
         List<long[]> shells = new ArrayList<>();
         List<List<long[]>> holes = new ArrayList<>();
@@ -117,26 +120,29 @@ public final class RegionMerger {
         return m.replace(drop, shells, holes);
     }
 
+    /**
+     * The union of Manhattan polygons by one sweep over the whole layer, without first grouping
+     * polygons whose boxes meet. {@link #merge} gives exactly this result (same rings, same order) for
+     * Manhattan input, faster; this path stays as the reference it is tested against.
+     *
+     * @throws IllegalArgumentException when a polygon has an edge that is neither horizontal nor vertical
+     */
+    public static MergedLayer mergeBySingleSweep(String name, Collection<Polygon> polygons) {
+        for (Polygon p : polygons) {
+            if (!p.isManhattan()) {
+                throw new IllegalArgumentException("layer " + name + ": the single sweep takes Manhattan polygons only");
+            }
+        }
+        return new ManhattanMerge(name, polygons).run();
+    }
+
     private static int[] grow(int[] parent, int id) {
         int[] p = id < parent.length ? parent : Arrays.copyOf(parent, Math.max(2 * parent.length, id + 1));
         p[id] = id;
         return p;
     }
 
-    private static int find(int[] p, int a) {
-        while (p[a] != a) {
-            p[a] = p[p[a]];
-            a = p[a];
-        }
-        return a;
-    }
 
-    private static void union(int[] p, int a, int b) {
-        int ra = find(p, a), rb = find(p, b);
-        if (ra != rb) {
-            p[Math.max(ra, rb)] = Math.min(ra, rb);
-        }
-    }
 
     private static Geometry shapeToJts(GeometryFactory gf, MergedLayer m, int s) {
         List<Polygon> rings = m.rings(s);
@@ -207,52 +213,11 @@ public final class RegionMerger {
         holes.addAll(h2);
     }
 
-    /** Builds a layer from shells (counter-clockwise) and their holes (clockwise). */
+    /** Builds a layer from shells (counter-clockwise) and their holes (clockwise), sorted by {@link #sortShapes}. */
     private static MergedLayer fromRings(String name, List<long[]> shells, List<List<long[]>> holes) {
         sortShapes(shells, holes);
-        Integer[] order = new Integer[shells.size()];
-        for (int i = 0; i < order.length; i++) {
-            order[i] = i;
-        }
-        int edges = 0;
-        int rings = 0;
-        for (int i = 0; i < shells.size(); i++) {
-            edges += shells.get(i).length / 2;
-            rings++;
-            for (long[] h : holes.get(i)) {
-                edges += h.length / 2;
-                rings++;
-            }
-        }
-        long[] xy = new long[4 * edges];
-        int[] ringStart = new int[rings + 1];
-        int[] ringShape = new int[rings];
-        boolean manhattan = true;
-        int e = 0, r = 0;
-        for (int s = 0; s < order.length; s++) {
-            List<long[]> all = new ArrayList<>();
-            all.add(shells.get(order[s]));
-            all.addAll(holes.get(order[s]));
-            for (long[] ring : all) {
-                ringStart[r] = e;
-                ringShape[r] = s;
-                int n = ring.length / 2;
-                for (int k = 0; k < n; k++) {
-                    int k1 = (k + 1) % n;
-                    xy[4 * e] = ring[2 * k];
-                    xy[4 * e + 1] = ring[2 * k + 1];
-                    xy[4 * e + 2] = ring[2 * k1];
-                    xy[4 * e + 3] = ring[2 * k1 + 1];
-                    if (xy[4 * e] != xy[4 * e + 2] && xy[4 * e + 1] != xy[4 * e + 3]) {
-                        manhattan = false;
-                    }
-                    e++;
-                }
-                r++;
-            }
-        }
-        ringStart[rings] = e;
-        return new MergedLayer(name, xy, ringStart, ringShape, order.length, manhattan);
+        MergedLayer empty = new MergedLayer(name, new long[0], new int[] {0}, new int[0], 0, true);
+        return empty.replace(new boolean[0], shells, holes);
     }
 
     private static long[] minVertex(long[] r) {
