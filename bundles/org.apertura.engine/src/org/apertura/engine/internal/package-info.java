@@ -3,7 +3,8 @@
  * SPDX-License-Identifier: EPL-2.0
  */
 /**
- * Internal algorithms of the check engine: the packed edge index, the facing-pair geometry and the
- * tiled parallel pair search. Not API.
+ * Internal algorithms of the check engine: the edge index (rows and columns of sorted axis-parallel
+ * edges, a grid for other angles), the facing-pair geometry, the parallel pair search over the index,
+ * the task runner and a radix sort that yields permutations. Not API.
  */
 package org.apertura.engine.internal;

@@ -126,25 +126,26 @@ public final class EngineBenchmark {
                 lastJtsSize = n;
                 measuredJts = jtsS;
             } else {
-                notes.add(measuredJts > 0
-                        ? String.format("JTS checker NOT RUN at %d rectangles: it took %.1f s (measured) at %d rectangles;"
-                                + " linear growth from there would exceed the %.0f s limit (--jts-limit). No JTS figure"
-                                + " for this size is reported.", n, measuredJts, lastJtsSize, jtsLimit)
-                        : String.format("JTS checker NOT RUN at %d rectangles: it runs first on a size of at most 100000"
-                                + " and then only while its linear extrapolation stays below %.0f s (--jts-limit).", n,
-                                jtsLimit));
+                String why = measuredJts > 0
+                        ? String.format("JTS checker at %d rectangles: it took %.1f s (measured) at %d rectangles and linear"
+                                + " growth from there would exceed the %.0f s limit (--jts-limit)", n, measuredJts,
+                                lastJtsSize, jtsLimit)
+                        : String.format("JTS checker at %d rectangles: it runs in this JVM first on a size of at most 100000"
+                                + " and then only while its linear extrapolation stays below %.0f s (--jts-limit)", n, jtsLimit);
                 lastJts = Double.POSITIVE_INFINITY;
-                if (jtsBound > 0) {
+                if (jtsBound <= 0) {
+                    notes.add(why + "; NOT RUN (--jts-bound 0), no JTS figure for this size.");
+                } else {
                     double bounded = boundedJts(n, jtsBound);
                     if (Double.isFinite(bounded)) {
                         jtsS = bounded;
-                        notes.add(String.format("JTS checker at %d rectangles ran in a separate JVM and finished in %.1f s.", n,
-                                bounded));
+                        notes.add(String.format("%s; so it ran in a separate JVM bounded to %.0f s (--jts-bound) and finished"
+                                + " in %.1f s (measured).", why, jtsBound, bounded));
                     } else {
                         jtsCell = String.format(">%.0f", jtsBound);
                         ratioCell = String.format(">%.0fx", jtsBound / engineSp);
-                        notes.add(String.format("JTS checker at %d rectangles ran in a separate JVM and was stopped after %.0f s"
-                                + " (--jts-bound) without finishing: the ratio shown is a measured lower bound.", n, jtsBound));
+                        notes.add(String.format("%s; so it ran in a separate JVM and was stopped after %.0f s (--jts-bound)"
+                                + " without finishing: its time and the ratio shown are measured lower bounds.", why, jtsBound));
                     }
                 }
             }
