@@ -35,8 +35,8 @@ public final class EdgeIndex {
     final long[] colX;
     final int[] colStart;
     final int[] vLo, vHi, vEdge;
-    /** edges neither horizontal nor vertical (all edges when sorted rows cannot be used) */
-    final int[] obliqueEdges;
+    /** edges kept in the grid: those neither horizontal nor vertical, or all when rows cannot be used */
+    final int[] gridEdges;
     private final boolean allInGrid;
     private final Grid grid;
 
@@ -99,7 +99,7 @@ public final class EdgeIndex {
                 other[k++] = e;
             }
         }
-        obliqueEdges = other;
+        gridEdges = other;
         allInGrid = nh + nv == 0;
         grid = other.length == 0 ? null : new Grid(layer, other, x0, y0, x1, y1);
     }
@@ -256,7 +256,7 @@ public final class EdgeIndex {
     /** Heap bytes of the index arrays. */
     public long retainedBytes() {
         return 8L * (rowY.length + colX.length) + 4L * (rowStart.length + colStart.length + hLo.length + hHi.length
-                + hEdge.length + vLo.length + vHi.length + vEdge.length + obliqueEdges.length)
+                + hEdge.length + vLo.length + vHi.length + vEdge.length + gridEdges.length)
                 + (grid == null ? 0 : grid.retainedBytes()) + 160;
     }
 

@@ -53,7 +53,7 @@ public final class PairSearch {
         }
         int chunk = exec.edgesPerTile();
         int hChunks = chunks(index.hEdge.length, chunk), vChunks = chunks(index.vEdge.length, chunk);
-        int gChunks = chunks(index.obliqueEdges.length, chunk);
+        int gChunks = chunks(index.gridEdges.length, chunk);
         int tasks = hChunks + vChunks + gChunks;
         exec.expect(tasks);
         return exec.map(tasks, t -> {
@@ -65,8 +65,8 @@ public final class PairSearch {
                 s.sweep(false, c * chunk, Math.min(index.vEdge.length, (c + 1) * chunk));
             } else {
                 int c = t - hChunks - vChunks;
-                for (int i = c * chunk, to = Math.min(index.obliqueEdges.length, (c + 1) * chunk); i < to; i++) {
-                    s.oblique(index.obliqueEdges[i]);
+                for (int i = c * chunk, to = Math.min(index.gridEdges.length, (c + 1) * chunk); i < to; i++) {
+                    s.fromGridEdge(index.gridEdges[i]);
                 }
             }
             return s.out;
@@ -214,7 +214,7 @@ public final class PairSearch {
          * other edge is horizontal or vertical, the lookup the sweeps cannot do for that vertex (it has no
          * edge parallel to the lines searched).
          */
-        void oblique(int e) {
+        void fromGridEdge(int e) {
             box(e);
             int p = layer.previous(e), n = layer.next(e);
             if (!ix.inGrid(p)) {
