@@ -64,7 +64,10 @@ public final class CheckEngine {
         return new Exec(options.threads(), options.progress()::progress, options.cancelled(), options.edgesPerTile());
     }
 
-    /** Merges every layer (in parallel over layers); the map is sorted by layer name. */
+    /**
+     * Merges every layer (in parallel over layers); the map is sorted by layer name. Each merged layer
+     * also gets the edge index the checks search (kept with the layer, see {@link MergedLayer#derived}).
+     */
     public Map<String, MergedLayer> merge(Map<String, ? extends Collection<Polygon>> layers) {
         return merge(layers, exec());
     }
@@ -72,7 +75,13 @@ public final class CheckEngine {
     private static Map<String, MergedLayer> merge(Map<String, ? extends Collection<Polygon>> layers, Exec exec) {
         List<String> names = new ArrayList<>(new TreeMap<>(layers).keySet());
         exec.expect(names.size());
-        List<MergedLayer> merged = exec.map(names.size(), i -> List.of(RegionMerger.merge(names.get(i), layers.get(names.get(i)))));
+        // each layer's search index right after its merge, in the same task: layers merge at different
+        // speeds, and a thread done early indexes its layer while another is still merging
+        List<MergedLayer> merged = exec.map(names.size(), i -> {
+            MergedLayer m = RegionMerger.merge(names.get(i), layers.get(names.get(i)), exec.threads());
+            index(m);
+            return List.of(m);
+        });
         Map<String, MergedLayer> out = new TreeMap<>();
         for (MergedLayer m : merged) {
             out.put(m.name(), m);
@@ -110,7 +119,7 @@ public final class CheckEngine {
         }
         List<String> names = new ArrayList<>(searched);
         exec.expect(names.size());
-        List<EdgeIndex> built = exec.map(names.size(), i -> List.of(new EdgeIndex(layers.get(names.get(i)))));
+        List<EdgeIndex> built = exec.map(names.size(), i -> List.of(index(layers.get(names.get(i)))));
         Map<String, EdgeIndex> indexes = new TreeMap<>();
         for (int i = 0; i < names.size(); i++) {
             indexes.put(names.get(i), built.get(i));
@@ -119,7 +128,7 @@ public final class CheckEngine {
         for (Rule rule : rules) {
             exec.checkCancelled();
             MergedLayer layer = layer(layers, rule.layer(), rule);
-            EdgeIndex index = indexes.computeIfAbsent(rule.layer(), k -> new EdgeIndex(layer));
+            EdgeIndex index = indexes.computeIfAbsent(rule.layer(), k -> index(layer));
             switch (rule) {
                 case WidthRule r -> all.addAll(width(layer, index, r, exec));
                 case SpacingRule r -> all.addAll(spacing(layer, index, r, exec));
@@ -128,7 +137,7 @@ public final class CheckEngine {
                 case AreaRule r -> all.addAll(area(layer, r));
                 case EnclosureRule r -> {
                     MergedLayer outer = layer(layers, r.outerLayer(), rule);
-                    EdgeIndex outerIndex = indexes.computeIfAbsent(r.outerLayer(), k -> new EdgeIndex(outer));
+                    EdgeIndex outerIndex = indexes.computeIfAbsent(r.outerLayer(), k -> index(outer));
                     all.addAll(enclosure(layer, outer, outerIndex, r, exec));
                 }
                 case DensityRule r -> all.addAll(density(layer, r, extent(layers)));
@@ -153,7 +162,7 @@ public final class CheckEngine {
         Exec exec = exec();
         Map<String, List<Extreme>> values = new TreeMap<>();
         for (MergedLayer layer : layers.values()) {
-            EdgeIndex index = new EdgeIndex(layer);
+            EdgeIndex index = index(layer);
             List<Object[]> found = new ArrayList<>();
             found.addAll(PairSearch.run(layer, index, range, -1, exec, (e, f, p, out) -> {
                 if (layer.shapeOf(e) == layer.shapeOf(f) && !shadowed(layer, index, e, f, p, EdgeIndex.buffer())) {
@@ -237,13 +246,18 @@ public final class CheckEngine {
 
     /** Builds the conflict graph for a mask rule and colours it ({@link Decomposition}). */
     public Decomposition decompose(MergedLayer layer, MaskRule rule) {
-        ConflictGraph g = ConflictGraph.build(layer, new EdgeIndex(layer), rule.sameMaskSpacing(), exec());
+        ConflictGraph g = ConflictGraph.build(layer, index(layer), rule.sameMaskSpacing(), exec());
         return Decomposition.colour(g, rule.masks());
     }
 
     /** The conflict graph of a layer at a colouring distance (shapes closer than it, Euclidean). */
     public ConflictGraph conflictGraph(MergedLayer layer, long distance) {
-        return ConflictGraph.build(layer, new EdgeIndex(layer), distance, exec());
+        return ConflictGraph.build(layer, index(layer), distance, exec());
+    }
+
+    /** The layer's edge index, built once per layer and shared by every check. */
+    private static EdgeIndex index(MergedLayer layer) {
+        return layer.derived(EdgeIndex.class, EdgeIndex::new);
     }
 
     private static MergedLayer layer(Map<String, MergedLayer> layers, String name, Rule rule) {

@@ -75,8 +75,29 @@ public final class EdgeIndex {
         baseX = x0;
         baseY = y0;
         boolean fits = !gridOnly && x1 - x0 < Integer.MAX_VALUE && y1 - y0 < Integer.MAX_VALUE;
-        Lines h = fits ? lines(layer, n, nh, true) : null;
-        Lines v = h != null ? lines(layer, n, nv, false) : null;
+        Lines h = null, v = null;
+        if (fits) {
+            // one pass over the edges fills both kinds: line offset, lower and upper end, edge (~edge if backwards)
+            int[] hAt = new int[nh], hLow = new int[nh], hHigh = new int[nh], hE = new int[nh];
+            int[] vAt = new int[nv], vLow = new int[nv], vHigh = new int[nv], vE = new int[nv];
+            int kh = 0, kv = 0;
+            for (int e = 0; e < n; e++) {
+                long ax = layer.x0(e), ay = layer.y0(e), bx = layer.x1(e), by = layer.y1(e);
+                if (ay == by && ax != bx) {
+                    hAt[kh] = (int) (ay - y0);
+                    hLow[kh] = (int) (Math.min(ax, bx) - x0);
+                    hHigh[kh] = (int) (Math.max(ax, bx) - x0);
+                    hE[kh++] = ax < bx ? e : ~e;
+                } else if (ax == bx && ay != by) {
+                    vAt[kv] = (int) (ax - x0);
+                    vLow[kv] = (int) (Math.min(ay, by) - y0);
+                    vHigh[kv] = (int) (Math.max(ay, by) - y0);
+                    vE[kv++] = ay < by ? e : ~e;
+                }
+            }
+            h = lines(hAt, hLow, hHigh, hE, y0);
+            v = h == null ? null : lines(vAt, vLow, vHigh, vE, x0);
+        }
         if (h == null || v == null) {
             h = Lines.EMPTY;
             v = Lines.EMPTY;
@@ -120,51 +141,67 @@ public final class EdgeIndex {
     }
 
     /**
-     * Sorted lines of horizontal (rows) or vertical (columns) edges, or null when two edges of a line
-     * overlap. A slot's edge number is complemented (~e) when the edge runs towards lower coordinates.
+     * Sorted lines of horizontal (rows) or vertical (columns) edges from their line offsets, lower and
+     * upper ends (offsets) and slot entries; null when two edges of a line overlap. Edges are bucketed by
+     * line offset (a counting sort when the offsets span little more than the edge count, else a radix
+     * sort), then each line is sorted along by its lower ends.
      */
-    private Lines lines(MergedLayer layer, int n, int count, boolean horizontal) {
-        long[] at = new long[count];
-        int[] low = new int[count], high = new int[count], edge = new int[count];
-        int want = horizontal ? HORIZONTAL : VERTICAL;
-        int k = 0;
-        long maxLow = 0;
-        for (int e = 0; e < n; e++) {
-            if (kind(layer, e) != want) {
-                continue;
+    private static Lines lines(int[] at, int[] low, int[] high, int[] edge, long base) {
+        int count = at.length;
+        int maxAt = 0;
+        for (int a : at) {
+            maxAt = Math.max(maxAt, a);
+        }
+        int[] order;
+        if (maxAt <= 4L * count + 4096) {
+            int[] pos = new int[maxAt + 2];
+            for (int a : at) {
+                pos[a + 1]++;
             }
-            long a = horizontal ? layer.x0(e) - baseX : layer.y0(e) - baseY;
-            long b = horizontal ? layer.x1(e) - baseX : layer.y1(e) - baseY;
-            at[k] = horizontal ? layer.y0(e) - baseY : layer.x0(e) - baseX;
-            low[k] = (int) Math.min(a, b);
-            high[k] = (int) Math.max(a, b);
-            edge[k] = a < b ? e : ~e;
-            maxLow = Math.max(maxLow, low[k]);
-            k++;
+            for (int i = 0; i <= maxAt; i++) {
+                pos[i + 1] += pos[i];
+            }
+            order = new int[count];
+            for (int i = 0; i < count; i++) {
+                order[pos[at[i]]++] = i;
+            }
+        } else {
+            long[] key = new long[count];
+            for (int i = 0; i < count; i++) {
+                key[i] = at[i];
+            }
+            order = RadixSort.order(key);
         }
-        // line offset above the lower end: one sort orders by line, then along it
-        int lowBits = 64 - Long.numberOfLeadingZeros(maxLow);
-        long[] key = new long[count];
-        for (int i = 0; i < count; i++) {
-            key[i] = at[i] << lowBits | low[i];
-        }
-        int[] order = RadixSort.order(key);
-        key = null;
-        int[] lo = new int[count], hi = new int[count], sortedEdge = new int[count];
+        // within each line by lower end; a key packs the lower end above the position
+        long[] along = new long[count];
         int lines = 0;
-        for (int i = 0; i < count; i++) {
-            if (i == 0 || at[order[i]] != at[order[i - 1]]) {
-                lines++;
+        for (int i = 0, j; i < count; i = j) {
+            int a = at[order[i]];
+            j = i + 1;
+            while (j < count && at[order[j]] == a) {
+                j++;
+            }
+            lines++;
+            if (j - i > 1) {
+                for (int k = i; k < j; k++) {
+                    along[k] = (long) low[order[k]] << 32 | order[k];
+                }
+                Arrays.sort(along, i, j);
+                for (int k = i; k < j; k++) {
+                    order[k] = (int) along[k];
+                }
             }
         }
+        along = null;
         long[] lineAt = new long[lines];
         int[] start = new int[lines + 1];
+        int[] lo = new int[count], hi = new int[count], sortedEdge = new int[count];
         int line = -1;
         for (int i = 0; i < count; i++) {
             int o = order[i];
             if (i == 0 || at[o] != at[order[i - 1]]) {
                 line++;
-                lineAt[line] = at[o] + (horizontal ? baseY : baseX);
+                lineAt[line] = at[o] + base;
                 start[line] = i;
             }
             sortedEdge[i] = edge[o];

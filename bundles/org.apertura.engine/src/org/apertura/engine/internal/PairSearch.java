@@ -105,14 +105,22 @@ public final class PairSearch {
             int[] entry = horizontal ? ix.hEdge : ix.vEdge;
             int line = lineOf(start, from);
             int near0 = -1, near1 = -1;
+            // per line within the reach: the first slot that can still reach the current edge; slots of
+            // a line come in ascending order, so these cursors only move forward
+            int[] cursor = new int[4];
             for (int i = from; i < to; i++) {
                 if (near0 < 0 || start[line + 1] <= i) {
                     while (start[line + 1] <= i) {
                         line++;
                     }
-                    // the lines within the reach of this one
                     near0 = EdgeIndex.firstLine(at, at[line] - reach + 1);
                     near1 = EdgeIndex.firstLine(at, at[line] + reach);
+                    if (cursor.length < near1 - near0) {
+                        cursor = new int[2 * (near1 - near0)];
+                    }
+                    for (int l = near0; l < near1; l++) {
+                        cursor[l - near0] = EdgeIndex.firstReaching(hi, start[l], start[l + 1], lo[i] - reach + 1);
+                    }
                 }
                 int e = EdgeIndex.edgeOf(entry[i]);
                 boolean forward = entry[i] >= 0;
@@ -121,8 +129,13 @@ public final class PairSearch {
                 for (int l = near0; l < near1; l++) {
                     long d1 = Math.abs(at[l] - at[line]);
                     long d1sq = d1 * d1;
-                    for (int j = EdgeIndex.firstReaching(hi, start[l], start[l + 1], a - reach + 1); j < start[l + 1]
-                            && lo[j] < b + reach; j++) {
+                    int end = start[l + 1];
+                    int j = cursor[l - near0];
+                    while (j < end && hi[j] < a - reach + 1) {
+                        j++;
+                    }
+                    cursor[l - near0] = j;
+                    for (; j < end && lo[j] < b + reach; j++) {
                         if (j == i) {
                             continue;
                         }

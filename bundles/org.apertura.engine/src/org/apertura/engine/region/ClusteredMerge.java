@@ -89,8 +89,10 @@ final class ClusteredMerge {
         }
         // members of each group, groups in order of their root
         int[] count = new int[n + 1];
+        int[] rootOf = new int[n];
         for (int i = 0; i < n; i++) {
-            count[UnionFind.find(parent, i) + 1]++;
+            rootOf[i] = UnionFind.find(parent, i);
+            count[rootOf[i] + 1]++;
         }
         for (int i = 0; i < n; i++) {
             count[i + 1] += count[i];
@@ -99,7 +101,7 @@ final class ClusteredMerge {
         int[] fill = new int[n];
         System.arraycopy(count, 0, fill, 0, n);
         for (int i = 0; i < n; i++) {
-            members[fill[UnionFind.find(parent, i)]++] = i;
+            members[fill[rootOf[i]]++] = i;
         }
         fill = null;
 

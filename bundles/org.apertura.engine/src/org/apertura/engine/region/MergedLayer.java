@@ -7,6 +7,8 @@ package org.apertura.engine.region;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.function.Function;
 
 import org.apertura.engine.geom.Box;
 import org.apertura.engine.geom.Polygon;
@@ -33,6 +35,7 @@ public final class MergedLayer {
     private final int[] shapeRingStart;
     private final int[] shapeRings;
     private final boolean manhattan;
+    private final ConcurrentHashMap<Class<?>, Object> derived = new ConcurrentHashMap<>(2);
 
     MergedLayer(String name, long[] xy, int[] ringStart, int[] ringShape, int shapeCount, boolean manhattan) {
         this.name = name;
@@ -153,6 +156,15 @@ public final class MergedLayer {
         }
         nStart[rr] = e;
         return new MergedLayer(name, nxy, nStart, nShape, shapes, isManhattan);
+    }
+
+    /**
+     * Data derived from this layer alone (such as a search index), computed on the first request and
+     * kept with the layer, so that every check of the layer shares it. Thread-safe: concurrent first
+     * requests compute it once.
+     */
+    public <T> T derived(Class<T> kind, Function<MergedLayer, ? extends T> compute) {
+        return kind.cast(derived.computeIfAbsent(kind, k -> compute.apply(this)));
     }
 
     /** The layer name given by the caller. */

@@ -35,6 +35,15 @@ public final class RegionMerger {
      * made them.
      */
     public static MergedLayer merge(String name, Collection<Polygon> polygons) {
+        return merge(name, polygons, 1);
+    }
+
+    /**
+     * Merges {@code polygons} as {@link #merge(String, Collection)} does, with the any-angle unions of
+     * separate clusters spread over up to {@code threads} threads; the result does not depend on the
+     * thread count.
+     */
+    public static MergedLayer merge(String name, Collection<Polygon> polygons, int threads) {
         List<Polygon> manhattan = new ArrayList<>(polygons.size());
         List<Polygon> other = new ArrayList<>();
         for (Polygon p : polygons) {
@@ -108,13 +117,32 @@ public final class RegionMerger {
         for (int i = 0; i < mixed.size(); i++) {
             byCluster[fill[UnionFind.find(parent, i)]++] = mixed.get(i);
         }
+        int[] clusters = java.util.stream.IntStream.range(0, mixed.size()).filter(c -> count[c + 1] > count[c]).toArray();
+        Geometry[] unions = new Geometry[clusters.length];
+        java.util.function.IntConsumer unite = k -> unions[k] = UnaryUnionNG.union(
+                gf.createGeometryCollection(Arrays.copyOfRange(byCluster, count[clusters[k]], count[clusters[k] + 1])),
+                gf.getPrecisionModel());
+        if (threads > 1 && clusters.length >= 64) {
+            java.util.concurrent.ForkJoinPool pool = new java.util.concurrent.ForkJoinPool(threads);
+            try {
+                pool.submit(() -> java.util.stream.IntStream.range(0, clusters.length).parallel().forEach(unite)).get();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new java.util.concurrent.CancellationException("interrupted while merging layer " + name);
+            } catch (java.util.concurrent.ExecutionException e) {
+                throw e.getCause() instanceof RuntimeException re ? re : new IllegalStateException(e.getCause());
+            } finally {
+                pool.shutdownNow();
+            }
+        } else {
+            for (int k = 0; k < clusters.length; k++) {
+                unite.accept(k);
+            }
+        }
         List<long[]> shells = new ArrayList<>();
         List<List<long[]>> holes = new ArrayList<>();
-        for (int c = 0; c < mixed.size(); c++) {
-            if (count[c + 1] > count[c]) {
-                Geometry[] part = Arrays.copyOfRange(byCluster, count[c], count[c + 1]);
-                collect(UnaryUnionNG.union(gf.createGeometryCollection(part), gf.getPrecisionModel()), shells, holes);
-            }
+        for (Geometry u : unions) {
+            collect(u, shells, holes);
         }
         sortShapes(shells, holes);
         return m.replace(drop, shells, holes);
