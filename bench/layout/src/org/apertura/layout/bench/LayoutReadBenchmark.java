@@ -22,6 +22,8 @@ import java.nio.file.StandardOpenOption;
 import java.util.Arrays;
 import java.util.Random;
 
+import com.sun.management.OperatingSystemMXBean;
+
 import org.apertura.layout.flatten.FlattenResult;
 import org.apertura.layout.flatten.Flattener;
 import org.apertura.layout.gds.GdsReadResult;
@@ -32,11 +34,13 @@ import org.apertura.layout.stream.GdsStreamReader;
 import org.apertura.layout.stream.StreamCell;
 import org.apertura.layout.stream.StreamFlattener;
 import org.apertura.layout.stream.StreamLayout;
+import org.apertura.layout.stream.StreamReadOptions;
 
 /**
- * Reading speed of the streaming reader {@link GdsStreamReader} and of the EMF reader
+ * Reading speed of the streaming reader {@link GdsStreamReader} (with its default options: structures
+ * parsed by one thread per available processor; and with one thread) and of the EMF reader
  * {@link GdsReader}, each beside a plain sequential read of the same file (an InputStream read into
- * a 256 KiB buffer) measured in the same run, rounds interleaved so machine load hits all three alike;
+ * a 256 KiB buffer) measured in the same run, rounds interleaved so machine load hits all alike;
  * and heap used per element by each result. Not a test: it prints figures. Arguments: the ASAP7
  * library file, a scratch folder for the generated file (deleted at the end), and the size in MB of
  * the generated file (at least 200).
@@ -45,6 +49,7 @@ public final class LayoutReadBenchmark {
 
     private static final int ROUNDS = 7;
     private static final int EMF_ROUNDS = 3;
+    private static final StreamReadOptions ONE_THREAD = StreamReadOptions.DEFAULTS.withThreads(1);
     private static volatile long sink;
 
     private LayoutReadBenchmark() {
@@ -113,20 +118,24 @@ public final class LayoutReadBenchmark {
             sink += plainRead(file);
             sink += recordWalk(file);
             sink += GdsStreamReader.read(file).cells().size();
+            sink += GdsStreamReader.read(file, ONE_THREAD).cells().size();
             sink += GdsReader.read(file).library().getCells().size();
         }
         double[] plain = new double[rounds];
         double[] plainCpu = new double[rounds];
         double[] walk = new double[rounds];
         double[] stream = new double[rounds];
-        double[] streamCpu = new double[rounds];
+        long streamCpuNanos = 0;
         double[] streamRatio = new double[rounds];
+        double[] single = new double[rounds];
+        double[] singleRatio = new double[rounds];
         double[] emf = new double[emfRounds];
         double[] emfCpu = new double[emfRounds];
         double[] emfRatio = new double[emfRounds];
         long streamGc = 0;
         long emfGc = 0;
         ThreadMXBean threads = ManagementFactory.getThreadMXBean();
+        OperatingSystemMXBean os = (OperatingSystemMXBean) ManagementFactory.getOperatingSystemMXBean();
         for (int i = 0; i < rounds; i++) {
             long c = threads.getCurrentThreadCpuTime();
             long t = System.nanoTime();
@@ -139,13 +148,20 @@ public final class LayoutReadBenchmark {
             walk[i] = mb / ((System.nanoTime() - t) / 1e9);
 
             long gc = gcMillis();
-            c = threads.getCurrentThreadCpuTime();
+            c = os.getProcessCpuTime();
             t = System.nanoTime();
             StreamLayout s = GdsStreamReader.read(file);
             stream[i] = mb / ((System.nanoTime() - t) / 1e9);
-            streamCpu[i] = mb / ((threads.getCurrentThreadCpuTime() - c) / 1e9);
+            streamCpuNanos += os.getProcessCpuTime() - c;
             streamGc += gcMillis() - gc;
             streamRatio[i] = stream[i] / plain[i];
+            sink += s.cells().size();
+            s = null;
+
+            t = System.nanoTime();
+            s = GdsStreamReader.read(file, ONE_THREAD);
+            single[i] = mb / ((System.nanoTime() - t) / 1e9);
+            singleRatio[i] = single[i] / plain[i];
             sink += s.cells().size();
             s = null;
 
@@ -164,17 +180,21 @@ public final class LayoutReadBenchmark {
         double p = median(plain);
         System.out.printf("plain sequential read : median %6.0f MB/s (best %.0f) wall clock; %.0f MB/s per CPU second"
                 + " (%d rounds)%n", p, max(plain), median(plainCpu), rounds);
-        System.out.printf("record walk (floor)   : median %6.0f MB/s wall clock; ratio to plain %.2f (mapped file, record"
-                + " headers followed and every XY value read; no checks, nothing kept)%n", median(walk),
+        System.out.printf("record walk, 1 thread : median %6.0f MB/s wall clock; ratio to plain %.2f (mapped file, record"
+                + " headers followed one by one and every XY value read; no checks, nothing kept)%n", median(walk),
                 median(walk) / p);
         System.out.printf("GdsStreamReader       : median %6.0f MB/s (best %.0f) wall clock; %.0f MB/s per CPU second"
-                + " of the reading thread; GC %.0f ms per read (%d rounds)%n", median(stream), max(stream),
-                median(streamCpu), (double) streamGc / rounds, rounds);
+                + " of the whole process (all threads, over all rounds); GC %.0f ms per read (%d rounds)%n",
+                median(stream), max(stream), mb * rounds / (streamCpuNanos / 1e9), (double) streamGc / rounds, rounds);
+        System.out.printf("GdsStreamReader 1 thr.: median %6.0f MB/s (best %.0f) wall clock (%d rounds)%n", median(single),
+                max(single), rounds);
         System.out.printf("GdsReader to EMF model: median %6.0f MB/s (best %.0f) wall clock; %.0f MB/s per CPU second"
                 + " of the reading thread; GC %.0f ms per read (%d rounds)%n", median(emf), max(emf), median(emfCpu),
                 (double) emfGc / emfRounds, emfRounds);
         System.out.printf("streaming / plain     : %.2f (median of per-round ratios %.2f; goal >= 0.5)%n",
                 median(stream) / p, median(streamRatio));
+        System.out.printf("streaming 1 thr./plain: %.2f (median of per-round ratios %.2f)%n", median(single) / p,
+                median(singleRatio));
         System.out.printf("EMF reader / plain    : %.2f (median of per-round ratios %.2f)%n", median(emf) / p,
                 median(emfRatio));
         heapPerElement(file);
@@ -220,8 +240,9 @@ public final class LayoutReadBenchmark {
     }
 
     /**
-     * The least any reader of the format must do: follow the record lengths through a mapped file
-     * and read every XY value. A floor for the streaming reader, printed for context.
+     * Following the record lengths one record at a time through a mapped file and reading every XY
+     * value, printed for context. (The streaming reader, which recognises whole elements at once and
+     * uses several threads, can be faster than this.)
      */
     private static long recordWalk(Path file) throws IOException {
         try (FileChannel ch = FileChannel.open(file, StandardOpenOption.READ)) {

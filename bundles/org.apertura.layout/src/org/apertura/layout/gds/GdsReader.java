@@ -135,9 +135,9 @@ public final class GdsReader {
                 skipOrFail("outside a structure");
             }
         }
-        long trailing = in.drainCountingNonZero();
-        if (trailing > 0) {
-            warnings.add(trailing + " non-zero bytes after ENDLIB ignored");
+        String trailing = GdsReadChecks.trailingBytesWarning(in.drainCountingNonZero());
+        if (trailing != null) {
+            warnings.add(trailing);
         }
         ((InternalEList<Cell>) library.getCells()).addAllUnique(cells);
         resolveReferences();
@@ -146,12 +146,13 @@ public final class GdsReader {
             throw new GdsFormatException(in.file(), cellOffsets.get(cycle.get(0)),
                     "cyclic cell references: " + CellHierarchy.path(cycle));
         }
-        if (!skipped.isEmpty()) {
-            int total = skipped.values().stream().mapToInt(Integer::intValue).sum();
-            warnings.add(0, total + " records skipped: " + skipped);
+        String skippedWarning = GdsReadChecks.skippedRecordsWarning(skipped);
+        if (skippedWarning != null) {
+            warnings.add(0, skippedWarning);
         }
-        if (roundedPitches > 0) {
-            warnings.add(roundedPitches + " array references whose span is not a multiple of the count: pitch rounded");
+        String pitchWarning = GdsReadChecks.roundedPitchesWarning(roundedPitches);
+        if (pitchWarning != null) {
+            warnings.add(pitchWarning);
         }
         return new GdsReadResult(library, topCells(cells), skipped, warnings);
     }
@@ -490,10 +491,10 @@ public final class GdsReader {
     }
 
     private int pitch(long span, int count) {
-        if (span % count != 0) {
+        if (GdsReadChecks.isPitchRounded(span, count)) {
             roundedPitches++;
         }
-        return (int) Math.round((double) span / count);
+        return GdsReadChecks.pitch(span, count);
     }
 
     private static void place(Placement p, int[] xy, int strans, double mag, double angle) {
@@ -507,23 +508,16 @@ public final class GdsReader {
     }
 
     private void requireLayer(int layer, long start, String kind) throws GdsFormatException {
-        if (layer == Integer.MIN_VALUE) {
-            throw new GdsFormatException(in.file(), start, kind + " element without LAYER");
-        }
+        GdsReadChecks.requireLayer(in.file(), layer, start, kind);
     }
 
     private void requireName(String sname, long start, String kind) throws GdsFormatException {
-        if (sname == null) {
-            throw new GdsFormatException(in.file(), start, kind + " element without SNAME");
-        }
+        GdsReadChecks.requireName(in.file(), sname != null, start, kind);
     }
 
     private void requirePoints(boolean ok, long start, String kind, int points, String expected)
             throws GdsFormatException {
-        if (!ok) {
-            throw new GdsFormatException(in.file(), start, kind + " element has " + points + " points in XY, expected "
-                    + expected);
-        }
+        GdsReadChecks.requirePoints(in.file(), ok, start, kind, points, expected);
     }
 
     /** Cells no reference points to, from the references collected while reading (no second pass). */

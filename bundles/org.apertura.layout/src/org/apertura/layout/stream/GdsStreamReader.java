@@ -5,6 +5,7 @@
 package org.apertura.layout.stream;
 
 import java.io.IOException;
+import java.io.InterruptedIOException;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
 import java.nio.channels.FileChannel;
@@ -14,11 +15,17 @@ import java.nio.file.StandardOpenOption;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.atomic.AtomicBoolean;
 
 import org.apertura.layout.gds.GdsFormatException;
+import org.apertura.layout.gds.GdsReadChecks;
 import org.apertura.layout.gds.GdsReader;
 import org.apertura.layout.gds.GdsRecordType;
 import org.apertura.layout.gds.Real8;
@@ -29,11 +36,23 @@ import org.apertura.layout.gds.Real8;
  * record or element, coordinates copied from the buffer into one growing {@code int} array per cell.
  * Files are memory-mapped in windows of up to 1 GiB, so any size works.
  * <p>
+ * Structures are parsed by several threads at once ({@link StreamReadOptions#threads()}): the input
+ * is cut into parts of about equal size, each starting at a structure (an ENDSTR record followed by
+ * a BGNSTR of the usual 28 bytes and a STRNAME, found by a byte scan near each cut), and the parts are
+ * parsed on their own. A part is used only when the part before it, parsed from its own start, ends
+ * exactly where it begins, between structures; otherwise that part's parser carries on past it, so a
+ * cut that is not a real structure start (the same bytes inside coordinates, say) costs time but never
+ * changes the result. The parts are joined in file order: cell names, duplicate definitions, missing
+ * cells and cycles are checked over the whole file, and the first error in file order is reported.
+ * The result is the same for every thread count.
+ * <p>
  * It accepts and rejects exactly what {@link GdsReader} accepts and rejects: every
  * {@link GdsFormatException} has the same file name, byte offset and problem text, and the skipped
  * record counts and warnings are the same. Text elements, properties and dates are checked as
  * GdsReader checks them but not kept. Memory is about 4 bytes per coordinate plus 8 bytes per
- * shape (24 for paths) and 56 per reference, in chunks of up to 16 MB shared by consecutive cells.
+ * shape (24 for paths) and 56 per reference, in chunks of up to 16 MB shared by consecutive cells
+ * (each part's last chunk cut to the size it uses when much of it is empty). A file of one huge
+ * structure is read by one thread: parts start only at structures.
  */
 public final class GdsStreamReader {
 
@@ -42,6 +61,12 @@ public final class GdsStreamReader {
     /** Smallest window: the largest record (65,535 bytes) must fit. */
     public static final long MIN_WINDOW = 1L << 16;
     private static final int NO_LAYER = Integer.MIN_VALUE;
+    /** ENDSTR (4 bytes, no data) and BGNSTR of 28 bytes with 16-bit integers: a likely structure start. */
+    private static final int ENDSTR_HEADER = 0x0004_0700;
+    private static final int BGNSTR_HEADER = 0x001C_0502;
+    private static final int STRNAME_TYPE = 0x0606;
+    /** How far past a cut the scan looks for a structure start in a mapped file. */
+    private static final long SCAN_LIMIT = 64L << 20;
 
     private final String file;
     private final FileChannel channel;
@@ -57,17 +82,45 @@ public final class GdsStreamReader {
     private int payloadStart;
     private int payloadLength;
 
+    // the part: where it starts, the starts of the parts after it (a landing there ends this part)
+    private final long[] partStarts;
+    private int nextPart;
+    private final long partBytes;
+    private final long partEnd;
+    private volatile boolean cancelled;
+    private final AtomicBoolean claimed = new AtomicBoolean();
+    private final CountDownLatch parsed = new CountDownLatch(1);
+
+    // what the part found
     private final NameTable names = new NameTable();
     private final Map<String, Integer> skipped = new TreeMap<>();
-    private final List<String> warnings = new ArrayList<>();
     private int roundedPitches;
+    private final List<StreamCell> cells = new ArrayList<>();
+    private int[] cellIds = new int[16];
+    private int[] definedIds = new int[16];
+    private int definedCount;
+    private boolean begun;
+    private boolean units;
+    private boolean unitsSeen;
+    private boolean libNameSeen;
+    private String libName;
+    private double userUnits;
+    private double metres;
+    private int landedAt = -1;
+    private boolean ended;
+    private long trailingNonZero;
+    private Throwable failure;
 
     // shape data of all cells, in chunks shared by consecutive cells: large chunks go straight to
     // the old generation, so collections do not copy them (per-cell arrays would be copied)
     // (16 MB less the array header, so that a chunk fills whole heap regions of G1)
     private static final int CHUNK = (1 << 22) - 16;
+    // near a part's end: 1 MB chunks, small enough for G1 to pack them densely (a large array left
+    // partly empty, or cut to size, would leave the rest of its last heap region unused)
+    private static final int SMALL_CHUNK = (1 << 18) - 16;
     private int[] data;
     private int dataLength;
+    private int chunkFirstCell;
     private int cellStart;
     private int shapeCount;
     private int textCount;
@@ -76,24 +129,40 @@ public final class GdsStreamReader {
     private int refCount;
     private int[] scratchXy = new int[16];
 
-    private GdsStreamReader(String file, FileChannel channel, ByteBuffer buffer, long fileSize, long window) {
+    private GdsStreamReader(String file, FileChannel channel, ByteBuffer whole, long fileSize, long window,
+            long[] partStarts, int part) {
         this.file = file;
         this.channel = channel;
         this.fileSize = fileSize;
         this.window = window;
-        this.buf = buffer;
-        this.limit = buffer == null ? 0 : buffer.capacity();
-        this.data = new int[firstChunk()];
+        this.partStarts = partStarts;
+        this.nextPart = part + 1;
+        long start = partStarts[part];
+        this.partEnd = part + 1 < partStarts.length ? partStarts[part + 1] : fileSize;
+        this.partBytes = partEnd - start;
+        if (whole != null) {
+            this.buf = whole.duplicate().order(ByteOrder.BIG_ENDIAN);
+            this.limit = buf.capacity();
+            this.payloadStart = (int) start;
+        }
+        this.begun = part > 0;
+        this.units = part > 0;
     }
 
-    /** A first chunk for the whole file when small: shapes take about as many bytes as in the file. */
+    /** A first chunk for the whole part when small: shapes take about as many bytes as in the file. */
     private int firstChunk() {
-        return (int) Math.min(CHUNK, fileSize / 4 + 64);
+        return chunkFor(partBytes);
+    }
+
+    /** A chunk size for the given bytes of the part left to read: large, or small near the end. */
+    private static int chunkFor(long bytesLeft) {
+        long wanted = bytesLeft / 4 + 64;
+        return (int) (wanted >= CHUNK ? CHUNK : Math.min(wanted, SMALL_CHUNK));
     }
 
     /** Reads a file through a read-only memory mapping; the path as given appears in error messages. */
     public static StreamLayout read(Path path) throws IOException {
-        return read(path, DEFAULT_WINDOW);
+        return read(path, StreamReadOptions.DEFAULTS);
     }
 
     /**
@@ -103,15 +172,13 @@ public final class GdsStreamReader {
      * @throws IllegalArgumentException if the window is below {@link #MIN_WINDOW} or above 2^31 - 1
      */
     public static StreamLayout read(Path path, long windowBytes) throws IOException {
-        if (windowBytes < MIN_WINDOW || windowBytes > Integer.MAX_VALUE) {
-            throw new IllegalArgumentException("window of " + windowBytes + " bytes; must be " + MIN_WINDOW + " to "
-                    + Integer.MAX_VALUE);
-        }
+        return read(path, StreamReadOptions.DEFAULTS.withWindowBytes(windowBytes));
+    }
+
+    /** Reads a file with the given window size and threads; the path as given appears in error messages. */
+    public static StreamLayout read(Path path, StreamReadOptions options) throws IOException {
         try (FileChannel ch = FileChannel.open(path, StandardOpenOption.READ)) {
-            long size = ch.size();
-            GdsStreamReader r = new GdsStreamReader(path.toString(), ch, null, size, windowBytes);
-            r.map(0);
-            return r.readLibrary();
+            return readInput(path.toString(), ch, null, ch.size(), options);
         }
     }
 
@@ -121,13 +188,365 @@ public final class GdsStreamReader {
      * @param fileName the name used in error messages
      */
     public static StreamLayout read(ByteBuffer buffer, String fileName) throws IOException {
+        return read(buffer, fileName, StreamReadOptions.DEFAULTS);
+    }
+
+    /** Like {@link #read(ByteBuffer, String)} with the given threads (the window size does not apply). */
+    public static StreamLayout read(ByteBuffer buffer, String fileName, StreamReadOptions options) throws IOException {
         ByteBuffer b = buffer.slice().order(ByteOrder.BIG_ENDIAN);
-        return new GdsStreamReader(fileName, null, b, b.capacity(), b.capacity()).readLibrary();
+        return readInput(fileName, null, b, b.capacity(), options);
     }
 
     /** Reads a byte array; {@code fileName} is used in error messages. */
     public static StreamLayout read(byte[] bytes, String fileName) throws IOException {
         return read(ByteBuffer.wrap(bytes), fileName);
+    }
+
+    /** Like {@link #read(byte[], String)} with the given threads. */
+    public static StreamLayout read(byte[] bytes, String fileName, StreamReadOptions options) throws IOException {
+        return read(ByteBuffer.wrap(bytes), fileName, options);
+    }
+
+    // ---- parts: cutting, parsing on worker threads, joining in file order ----
+
+    /**
+     * Where a read of the buffer (from its position to its limit) with these options starts its
+     * parts: offsets from the buffer's position, 0 first, each later one a likely structure start
+     * (see the class comment); one element when the input is read sequentially. For diagnostics and
+     * tests: the result of a read does not depend on it.
+     */
+    public static long[] partStarts(ByteBuffer buffer, StreamReadOptions options) throws IOException {
+        ByteBuffer b = buffer.slice().order(ByteOrder.BIG_ENDIAN);
+        return partStarts(null, b, b.capacity(), options.parts(b.capacity()));
+    }
+
+    /** Daemon threads shared by all reads; idle ones end after a minute. */
+    private static final class Workers {
+        static final ExecutorService POOL = Executors.newCachedThreadPool(r -> {
+            Thread t = new Thread(r, "gds-stream-reader");
+            t.setDaemon(true);
+            return t;
+        });
+    }
+
+    private static StreamLayout readInput(String file, FileChannel ch, ByteBuffer whole, long size,
+            StreamReadOptions options) throws IOException {
+        long[] starts = partStarts(ch, whole, size, options.parts(size));
+        int n = starts.length;
+        GdsStreamReader[] parts = new GdsStreamReader[n];
+        for (int i = 0; i < n; i++) {
+            parts[i] = new GdsStreamReader(file, ch, whole, size, options.windowBytes(), starts, i);
+        }
+        try {
+            parts[0].claimed.set(true); // the calling thread's
+            for (int t = 1; t < n; t++) {
+                Workers.POOL.execute(() -> {
+                    for (int i = 1; i < n; i++) {
+                        parts[i].claimAndParse();
+                    }
+                });
+            }
+            parts[0].parseClaimed();
+            Joined joined = new Joined(file);
+            int at = 0;
+            while (true) {
+                GdsStreamReader part = parts[at];
+                // parse the part here unless a worker has begun it, and while a worker parses it,
+                // parse later ones nobody has begun (when workers are slow to start, on a busy
+                // machine, the calling thread reads on alone)
+                part.claimAndParse();
+                for (int later = at + 1; later < n && part.parsed.getCount() > 0; later++) {
+                    parts[later].claimAndParse();
+                }
+                part.awaitParsed();
+                joined.add(part);
+                if (part.ended) {
+                    break;
+                }
+                if (part.landedAt <= at) {
+                    throw new IllegalStateException("part " + at + " of " + file + " ended without a result");
+                }
+                for (int skip = at + 1; skip < part.landedAt; skip++) {
+                    parts[skip].cancelled = true;
+                }
+                at = part.landedAt;
+            }
+            return joined.layout();
+        } finally {
+            for (GdsStreamReader part : parts) {
+                part.cancelled = true;
+            }
+        }
+    }
+
+    /** Parses this part on the current thread unless a thread has claimed it already. */
+    private void claimAndParse() {
+        if (!cancelled && claimed.compareAndSet(false, true)) {
+            parseClaimed();
+        }
+    }
+
+    private void parseClaimed() {
+        try {
+            parsePart();
+        } finally {
+            parsed.countDown();
+        }
+    }
+
+    private void awaitParsed() throws IOException {
+        try {
+            parsed.await();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new InterruptedIOException("interrupted while reading GDSII structures");
+        }
+    }
+
+    /**
+     * Where the parts start: 0, then for each cut at k/parts of the input the first likely structure
+     * start at or after it and before the next cut (a cut without one is dropped).
+     */
+    private static long[] partStarts(FileChannel ch, ByteBuffer whole, long size, int parts) throws IOException {
+        long[] starts = new long[parts];
+        int n = 1;
+        for (int k = 1; k < parts; k++) {
+            long from = Math.max(starts[n - 1] + 2, (size * k / parts) & ~1L);
+            long to = Math.min(size, size * (k + 1) / parts);
+            long s = findStructureStart(ch, whole, from, to);
+            if (s >= 0) {
+                starts[n++] = s;
+            }
+        }
+        return Arrays.copyOf(starts, n);
+    }
+
+    /**
+     * The first even offset s in [from, to) where an ENDSTR record ends and a BGNSTR record of 28
+     * bytes is followed by a STRNAME record, or -1. Only a guess: parsing confirms it or not.
+     */
+    private static long findStructureStart(FileChannel ch, ByteBuffer whole, long from, long to) throws IOException {
+        from = Math.max(from, 4);
+        if (to - from < 4) {
+            return -1;
+        }
+        long size = ch != null ? ch.size() : whole.capacity();
+        long end = Math.min(to, from + SCAN_LIMIT);
+        long viewStart = from - 4;
+        long viewEnd = Math.min(size, end + 32);
+        ByteBuffer b = ch != null ? ch.map(FileChannel.MapMode.READ_ONLY, viewStart, viewEnd - viewStart)
+                : whole.slice((int) viewStart, (int) (viewEnd - viewStart));
+        b.order(ByteOrder.BIG_ENDIAN);
+        int last = (int) Math.min(end - viewStart, b.capacity() - 32);
+        for (int q = 4; q < last; q += 2) {
+            if (b.getInt(q) == BGNSTR_HEADER && b.getInt(q - 4) == ENDSTR_HEADER
+                    && (b.getShort(q + 30) & 0xFFFF) == STRNAME_TYPE) {
+                return viewStart + q;
+            }
+        }
+        return -1;
+    }
+
+    /** Parses this part on the current thread, keeping any failure for the join. */
+    private void parsePart() {
+        try {
+            data = new int[firstChunk()]; // here, so that the parts' threads allocate in parallel
+            if (channel != null) {
+                map(partStarts[nextPart - 1]);
+            }
+            if (nextPart == 1) {
+                readHeader();
+            }
+            readLibrary();
+            trimLastChunk();
+        } catch (Throwable e) { // Cancelled included
+            failure = e;
+        }
+    }
+
+    /** Thrown inside a part nobody needs any more. */
+    private static final class Cancelled extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        Cancelled() {
+            super("part no longer needed", null, false, false);
+        }
+    }
+
+    private void checkCancelled() {
+        if (cancelled) {
+            throw new Cancelled();
+        }
+    }
+
+    /**
+     * The parts in file order, joined as one sequential reader would have seen them: a part's
+     * definitions are checked against the earlier parts' before its own first error is thrown.
+     */
+    private static final class Joined {
+        private final String file;
+        private final Map<String, Integer> ids = new HashMap<>();
+        private final List<String> idNames = new ArrayList<>();
+        private long[] definedAt = new long[64];
+        private long[] referencedAt = new long[64];
+        private String[] referencedBy = new String[64];
+        private final List<StreamCell> cells = new ArrayList<>();
+        private int[] cellIds = new int[64];
+        private final Map<String, Integer> skipped = new TreeMap<>();
+        private int roundedPitches;
+        private String libName;
+        private double userUnits;
+        private double metres;
+        private long trailingNonZero;
+
+        Joined(String file) {
+            this.file = file;
+        }
+
+        private int id(String name) {
+            Integer id = ids.get(name);
+            if (id != null) {
+                return id;
+            }
+            int n = idNames.size();
+            if (n == definedAt.length) {
+                definedAt = Arrays.copyOf(definedAt, 2 * n);
+                referencedAt = Arrays.copyOf(referencedAt, 2 * n);
+                referencedBy = Arrays.copyOf(referencedBy, 2 * n);
+            }
+            definedAt[n] = -1;
+            referencedAt[n] = -1;
+            ids.put(name, n);
+            idNames.add(name);
+            return n;
+        }
+
+        void add(GdsStreamReader part) throws IOException {
+            NameTable names = part.names;
+            for (int d = 0; d < part.definedCount; d++) {
+                int local = part.definedIds[d];
+                int id = id(names.name(local));
+                if (definedAt[id] >= 0) {
+                    throw new GdsFormatException(file, names.namedAt(local), "structure '" + names.name(local)
+                            + "' defined twice (first at byte " + definedAt[id] + ")");
+                }
+                definedAt[id] = names.definedAt(local);
+            }
+            if (part.failure != null) {
+                throw rethrow(part.failure);
+            }
+            int[] global = new int[names.size()];
+            for (int local = 0; local < global.length; local++) {
+                int id = id(names.name(local));
+                global[local] = id;
+                if (referencedAt[id] < 0 && names.referencedAt(local) >= 0) {
+                    referencedAt[id] = names.referencedAt(local);
+                    referencedBy[id] = names.name(names.referencedBy(local));
+                }
+            }
+            for (int i = 0; i < part.cells.size(); i++) {
+                StreamCell c = part.cells.get(i);
+                int[] r = c.referenceData();
+                for (int j = 0; j < r.length; j += StreamCell.REF_STRIDE) {
+                    r[j] = global[r[j]];
+                }
+                if (cells.size() == cellIds.length) {
+                    cellIds = Arrays.copyOf(cellIds, 2 * cellIds.length);
+                }
+                cellIds[cells.size()] = global[part.cellIds[i]];
+                cells.add(c);
+            }
+            part.skipped.forEach((k, v) -> skipped.merge(k, v, Integer::sum));
+            roundedPitches += part.roundedPitches;
+            if (part.libNameSeen) {
+                libName = part.libName;
+            }
+            if (part.unitsSeen) {
+                userUnits = part.userUnits;
+                metres = part.metres;
+            }
+            trailingNonZero += part.trailingNonZero;
+        }
+
+        private static IOException rethrow(Throwable t) {
+            if (t instanceof IOException e) {
+                return e;
+            }
+            if (t instanceof RuntimeException e) {
+                throw e;
+            }
+            if (t instanceof Error e) {
+                throw e;
+            }
+            throw new IllegalStateException(t);
+        }
+
+        /**
+         * The layout: references resolved to cell indexes (a reference to a name no structure
+         * defines fails at its first SNAME in file order, as GdsReader reports it), no cycles.
+         */
+        StreamLayout layout() throws GdsFormatException {
+            List<String> warnings = new ArrayList<>();
+            String trailing = GdsReadChecks.trailingBytesWarning(trailingNonZero);
+            if (trailing != null) {
+                warnings.add(trailing);
+            }
+            int[] indexOfName = new int[idNames.size()];
+            Arrays.fill(indexOfName, -1);
+            for (int i = 0; i < cells.size(); i++) {
+                indexOfName[cellIds[i]] = i;
+            }
+            int missing = -1;
+            for (int id = 0; id < indexOfName.length; id++) {
+                if (indexOfName[id] < 0 && referencedAt[id] >= 0
+                        && (missing < 0 || referencedAt[id] < referencedAt[missing])) {
+                    missing = id;
+                }
+            }
+            if (missing >= 0) {
+                throw new GdsFormatException(file, referencedAt[missing], "cell '" + referencedBy[missing]
+                        + "' references missing cell '" + idNames.get(missing) + "'");
+            }
+            for (StreamCell c : cells) {
+                int[] r = c.referenceData();
+                for (int i = 0; i < r.length; i += StreamCell.REF_STRIDE) {
+                    r[i] = indexOfName[r[i]];
+                }
+            }
+            List<StreamCell> cycle = findCycle(cells);
+            if (!cycle.isEmpty()) {
+                StringBuilder path = new StringBuilder();
+                for (StreamCell c : cycle) {
+                    if (path.length() > 0) {
+                        path.append('/');
+                    }
+                    path.append(c.name());
+                }
+                throw new GdsFormatException(file, cycle.get(0).offset(), "cyclic cell references: " + path);
+            }
+            String skippedWarning = GdsReadChecks.skippedRecordsWarning(skipped);
+            if (skippedWarning != null) {
+                warnings.add(0, skippedWarning);
+            }
+            String pitchWarning = GdsReadChecks.roundedPitchesWarning(roundedPitches);
+            if (pitchWarning != null) {
+                warnings.add(pitchWarning);
+            }
+            boolean[] referenced = new boolean[cells.size()];
+            for (StreamCell c : cells) {
+                int[] r = c.referenceData();
+                for (int i = 0; i < r.length; i += StreamCell.REF_STRIDE) {
+                    referenced[r[i]] = true;
+                }
+            }
+            List<StreamCell> tops = new ArrayList<>();
+            for (int i = 0; i < cells.size(); i++) {
+                if (!referenced[i]) {
+                    tops.add(cells.get(i));
+                }
+            }
+            return new StreamLayout(libName, userUnits, metres, cells, tops, skipped, warnings);
+        }
     }
 
     private void map(long at) throws IOException {
@@ -158,9 +577,10 @@ public final class GdsStreamReader {
         }
         recordOffset = at;
         ByteBuffer b = buf;
-        int length = b.getShort(pos) & 0xFFFF;
-        recordType = b.get(pos + 2) & 0xFF;
-        dataType = b.get(pos + 3) & 0xFF;
+        int header = b.getInt(pos);
+        int length = header >>> 16;
+        recordType = (header >> 8) & 0xFF;
+        dataType = header & 0xFF;
         if (length < 4) {
             throw error("record length " + length + " is below the 4-byte header (record type "
                     + GdsRecordType.nameOf(recordType) + ")");
@@ -234,7 +654,7 @@ public final class GdsStreamReader {
 
     // ---- library and structures, following GdsReader step by step ----
 
-    private StreamLayout readLibrary() throws IOException {
+    private void readHeader() throws IOException {
         if (!next()) {
             throw error("empty file: no HEADER record");
         }
@@ -242,14 +662,25 @@ public final class GdsStreamReader {
             throw error("file does not start with a HEADER record (found " + GdsRecordType.nameOf(recordType) + ")");
         }
         check(GdsRecordType.HEADER, 2);
-        boolean begun = false;
-        boolean units = false;
-        String libName = null;
-        double user = 0;
-        double metres = 0;
-        List<StreamCell> cells = new ArrayList<>();
-        List<Integer> cellIds = new ArrayList<>();
+    }
+
+    /**
+     * Library records from the part's start until ENDLIB, or until the start of a later part is
+     * reached between structures (with BGNLIB and UNITS read, as a later part assumes).
+     */
+    private void readLibrary() throws IOException {
         while (true) {
+            if (nextPart < partStarts.length) {
+                long at = base + payloadStart + payloadLength;
+                while (nextPart < partStarts.length && partStarts[nextPart] < at) {
+                    nextPart++;
+                }
+                if (nextPart < partStarts.length && partStarts[nextPart] == at && begun && units) {
+                    landedAt = nextPart;
+                    return;
+                }
+            }
+            checkCancelled();
             if (!next()) {
                 throw error("file ends before ENDLIB");
             }
@@ -261,6 +692,7 @@ public final class GdsStreamReader {
                 check(GdsRecordType.LIBNAME, 0);
                 String n = string();
                 libName = n.isEmpty() ? null : n;
+                libNameSeen = true;
             } else if (type == 0x03) { // UNITS
                 check(GdsRecordType.UNITS, 16);
                 double u = real8(0);
@@ -268,60 +700,26 @@ public final class GdsStreamReader {
                 if (!(u > 0) || !(m > 0)) {
                     throw error("UNITS must be positive, found " + u + " user units and " + m + " m per database unit");
                 }
-                user = u;
+                userUnits = u;
                 metres = m;
                 units = true;
+                unitsSeen = true;
             } else if (type == 0x05) { // BGNSTR
                 if (!begun || !units) {
                     throw error("BGNSTR before " + (begun ? "UNITS" : "BGNLIB"));
                 }
-                readStructure(cells, cellIds);
+                readStructure();
             } else if (type == 0x04) { // ENDLIB
-                break;
+                trailingNonZero = drainCountingNonZero();
+                ended = true;
+                return;
             } else {
                 skipOrFail("outside a structure");
             }
         }
-        long trailing = drainCountingNonZero();
-        if (trailing > 0) {
-            warnings.add(trailing + " non-zero bytes after ENDLIB ignored");
-        }
-        List<StreamCell> resolved = resolveReferences(cells, cellIds);
-        List<StreamCell> cycle = findCycle(resolved);
-        if (!cycle.isEmpty()) {
-            StringBuilder path = new StringBuilder();
-            for (StreamCell c : cycle) {
-                if (path.length() > 0) {
-                    path.append('/');
-                }
-                path.append(c.name());
-            }
-            throw new GdsFormatException(file, cycle.get(0).offset(), "cyclic cell references: " + path);
-        }
-        if (!skipped.isEmpty()) {
-            int total = skipped.values().stream().mapToInt(Integer::intValue).sum();
-            warnings.add(0, total + " records skipped: " + skipped);
-        }
-        if (roundedPitches > 0) {
-            warnings.add(roundedPitches + " array references whose span is not a multiple of the count: pitch rounded");
-        }
-        boolean[] referenced = new boolean[resolved.size()];
-        for (StreamCell c : resolved) {
-            int[] r = c.referenceData();
-            for (int i = 0; i < r.length; i += StreamCell.REF_STRIDE) {
-                referenced[r[i]] = true;
-            }
-        }
-        List<StreamCell> tops = new ArrayList<>();
-        for (int i = 0; i < resolved.size(); i++) {
-            if (!referenced[i]) {
-                tops.add(resolved.get(i));
-            }
-        }
-        return new StreamLayout(libName, user, metres, resolved, tops, skipped, warnings);
     }
 
-    private void readStructure(List<StreamCell> cells, List<Integer> cellIds) throws IOException {
+    private void readStructure() throws IOException {
         long start = recordOffset;
         check(GdsRecordType.BGNSTR, 24);
         cellStart = dataLength;
@@ -329,12 +727,17 @@ public final class GdsStreamReader {
         textCount = 0;
         refCount = 0;
         int id = -1;
+        int records = 0;
         while (true) {
             if (!next()) {
                 throw error("file ends inside structure " + (id < 0 ? "(unnamed)" : "'" + names.name(id) + "'"));
             }
             int type = recordType;
-            if (type == 0x06) { // STRNAME
+            if ((type == 0x08 || type == 0x09 || type == 0x0C) && id >= 0 && plainElements()) {
+                if ((++records & 0x3FF) == 0) {
+                    checkCancelled();
+                }
+            } else if (type == 0x06) { // STRNAME
                 check(GdsRecordType.STRNAME, 1);
                 int n = stringLength();
                 if (n == 0) {
@@ -349,16 +752,18 @@ public final class GdsStreamReader {
                             + names.definedAt(found) + ")");
                 }
                 id = found >= 0 ? found : names.add(buf, payloadStart, n);
-                names.define(id, start);
+                names.define(id, start, recordOffset);
+                if (definedCount == definedIds.length) {
+                    definedIds = Arrays.copyOf(definedIds, 2 * definedCount);
+                }
+                definedIds[definedCount++] = id;
             } else if (type == 0x07) { // ENDSTR
                 break;
             } else if (GdsRecordType.isElementStart(type)) {
                 if (id < 0) {
                     throw error(GdsRecordType.nameOf(type) + " element in a structure without STRNAME");
                 }
-                if (!(type == 0x08 ? plainBoundary() : type == 0x09 && plainPath())) {
-                    readElement(id, type);
-                }
+                readElement(id, type);
             } else {
                 skipOrFail("outside an element in structure " + (id < 0 ? "(unnamed)" : "'" + names.name(id) + "'"));
             }
@@ -366,10 +771,13 @@ public final class GdsStreamReader {
         if (id < 0) {
             throw new GdsFormatException(file, start, "structure without STRNAME");
         }
+        if (cells.size() == cellIds.length) {
+            cellIds = Arrays.copyOf(cellIds, 2 * cellIds.length);
+        }
+        cellIds[cells.size()] = id;
         cells.add(new StreamCell(names.name(id), start, data, cellStart, dataLength, shapeCount,
                 Arrays.copyOf(refs, refCount * StreamCell.REF_STRIDE), Arrays.copyOf(refTransforms, refCount * 2),
                 textCount));
-        cellIds.add(id);
     }
 
     /**
@@ -602,9 +1010,7 @@ public final class GdsStreamReader {
                 textCount++;
             }
             case 0x0A, 0x0B -> {
-                if (snameId < 0) {
-                    throw new GdsFormatException(file, start, kindName + " element without SNAME");
-                }
+                GdsReadChecks.requireName(file, snameId >= 0, start, kindName);
                 int[] xy = scratchXy;
                 int columnPitchX = 0;
                 int columnPitchY = 0;
@@ -652,108 +1058,217 @@ public final class GdsStreamReader {
     }
 
     /**
-     * The common case, taken only when it cannot fail: a BOUNDARY record without payload followed in
-     * this window by exactly LAYER, DATATYPE, XY (at least one point) and ENDEL with their prescribed
-     * data types and lengths. Then the element is stored and the reader stands on its ENDEL, as
-     * {@link #readElement} would leave it; otherwise nothing changes and false is returned.
+     * The common case, taken only when it cannot fail: standing on a BOUNDARY, PATH or TEXT record
+     * without payload, stores (texts: counts) as many consecutive elements of these kinds as are
+     * plain and lie whole in this window. A plain BOUNDARY is exactly LAYER, DATATYPE, XY (at least
+     * one point) and ENDEL with their prescribed data types and lengths; a plain PATH may add
+     * PATHTYPE (0, 1, 2 or 4) and WIDTH before the XY; a plain TEXT is described at
+     * {@link #plainText}. No per-record checks are needed: the patterns imply them. Afterwards the reader stands on the last ENDEL, as {@link #readElement} would
+     * leave it; when the first element is not plain nothing changes and false is returned.
      */
-    private boolean plainBoundary() {
+    private boolean plainElements() {
         ByteBuffer b = buf;
-        int p = payloadStart;
-        if (payloadLength != 0 || p + 16 > limit || dataType != 0) {
+        int lim = limit;
+        int p = payloadStart - 4;
+        int[] d = data;
+        int length = dataLength;
+        int shapes = shapeCount;
+        int texts = textCount;
+        int lastEndel = -1;
+        while (p + 20 <= lim) {
+            // element record and LAYER header; LAYER value, DATATYPE header and value
+            long head = b.getLong(p);
+            int header;
+            int kind;
+            if (head == 0x0004_0800_0006_0D02L) {
+                header = 2;
+                kind = StreamCell.BOUNDARY;
+            } else if (head == 0x0004_0900_0006_0D02L) {
+                header = 6;
+                kind = StreamCell.PATH;
+            } else if (head == 0x0004_0C00_0006_0D02L) {
+                int endel = plainText(b, p, lim);
+                if (endel < 0) {
+                    break;
+                }
+                texts++;
+                lastEndel = endel;
+                p = endel + 4;
+                continue;
+            } else {
+                break;
+            }
+            long layerKey = b.getLong(p + 8);
+            if ((int) (layerKey >>> 16) != 0x0006_0E02) {
+                break;
+            }
+            int q = p + 16;
+            int pathType = 0;
+            int width = 0;
+            if (kind == StreamCell.PATH) {
+                if (q + 6 <= lim && b.getInt(q) == 0x0006_2102) {
+                    pathType = b.getShort(q + 4);
+                    if (pathType != 0 && pathType != 1 && pathType != 2 && pathType != 4) {
+                        break;
+                    }
+                    q += 6;
+                }
+                if (q + 8 <= lim && b.getInt(q) == 0x0008_0F03) {
+                    width = b.getInt(q + 4);
+                    q += 8;
+                }
+                if (q + 4 > lim) {
+                    break;
+                }
+            }
+            int xyHeader = b.getInt(q);
+            int xyLength = xyHeader >>> 16;
+            if ((xyHeader & 0xFFFF) != 0x1003 || xyLength < 12 || ((xyLength - 4) & 7) != 0) {
+                break;
+            }
+            int endel = q + xyLength;
+            if (endel + 4 > lim || b.getInt(endel) != 0x0004_1100) {
+                break;
+            }
+            int values = (xyLength - 4) >> 2;
+            if (length + header + values > d.length) {
+                dataLength = length;
+                grow(header + values);
+                d = data;
+                length = dataLength;
+            }
+            d[length] = kind << 28 | values >> 1;
+            d[length + 1] = (int) (layerKey >> 48) << 16 | (int) (layerKey & 0xFFFF);
+            if (kind == StreamCell.PATH) {
+                d[length + 2] = pathType;
+                d[length + 3] = width;
+                d[length + 4] = 0;
+                d[length + 5] = 0;
+            }
+            int to = length + header;
+            int from = q + 4;
+            if (values == 10) { // five points: the closed rectangle most boundaries are
+                long xy0 = b.getLong(from);
+                long xy1 = b.getLong(from + 8);
+                long xy2 = b.getLong(from + 16);
+                long xy3 = b.getLong(from + 24);
+                long xy4 = b.getLong(from + 32);
+                d[to] = (int) (xy0 >> 32);
+                d[to + 1] = (int) xy0;
+                d[to + 2] = (int) (xy1 >> 32);
+                d[to + 3] = (int) xy1;
+                d[to + 4] = (int) (xy2 >> 32);
+                d[to + 5] = (int) xy2;
+                d[to + 6] = (int) (xy3 >> 32);
+                d[to + 7] = (int) xy3;
+                d[to + 8] = (int) (xy4 >> 32);
+                d[to + 9] = (int) xy4;
+            } else {
+                for (int i = 0; i < values; i += 2) {
+                    long xy = b.getLong(from + 4 * i);
+                    d[to + i] = (int) (xy >> 32);
+                    d[to + i + 1] = (int) xy;
+                }
+            }
+            length = to + values;
+            shapes++;
+            lastEndel = endel;
+            p = endel + 4;
+        }
+        dataLength = length;
+        shapeCount = shapes;
+        textCount = texts;
+        if (lastEndel < 0) {
             return false;
         }
-        if (b.getInt(p) != 0x0006_0D02 || b.getInt(p + 6) != 0x0006_0E02) {
-            return false;
-        }
-        int xyHeader = b.getInt(p + 12);
-        int xyLength = xyHeader >>> 16;
-        if ((xyHeader & 0xFFFF) != 0x1003 || xyLength < 12 || ((xyLength - 4) & 7) != 0) {
-            return false;
-        }
-        int endel = p + 12 + xyLength;
-        if (endel + 4 > limit || b.getInt(endel) != 0x0004_1100) {
-            return false;
-        }
-        int layer = b.getShort(p + 4);
-        int datatype = b.getShort(p + 10);
-        int values = (xyLength - 4) >> 2;
-        payloadStart = p + 16;
-        payloadLength = xyLength - 4;
-        copyXy(true, 2, values);
-        int at = dataLength;
-        data[at] = StreamCell.BOUNDARY << 28 | values >> 1;
-        data[at + 1] = layer << 16 | (datatype & 0xFFFF);
-        dataLength = at + 2 + values;
-        shapeCount++;
-        recordOffset = base + endel;
+        recordOffset = base + lastEndel;
         recordType = 0x11;
         dataType = 0;
-        payloadStart = endel + 4;
+        payloadStart = lastEndel + 4;
         payloadLength = 0;
         return true;
     }
 
     /**
-     * Like {@link #plainBoundary()} for a PATH: LAYER, DATATYPE, optional PATHTYPE (0, 1, 2 or 4),
-     * optional WIDTH, XY (at least one point), ENDEL.
+     * The ENDEL offset of a plain TEXT element at {@code p}, or -1: LAYER, TEXTTYPE, optional
+     * PRESENTATION (justifications defined), optional STRANS, MAG (positive) and ANGLE, XY of one
+     * point, STRING and ENDEL, each with its prescribed data type and length, all before
+     * {@code lim}. Texts are counted, not kept.
      */
-    private boolean plainPath() {
-        ByteBuffer b = buf;
-        int p = payloadStart;
-        if (payloadLength != 0 || p + 16 > limit || dataType != 0) {
-            return false;
+    private static int plainText(ByteBuffer b, int p, int lim) {
+        if ((int) (b.getLong(p + 8) >>> 16) != 0x0006_1602) {
+            return -1;
         }
-        if (b.getInt(p) != 0x0006_0D02 || b.getInt(p + 6) != 0x0006_0E02) {
-            return false;
-        }
-        int q = p + 12;
-        int pathType = 0;
-        int width = 0;
-        if (q + 6 <= limit && b.getInt(q) == 0x0006_2102) {
-            pathType = b.getShort(q + 4);
-            if (pathType != 0 && pathType != 1 && pathType != 2 && pathType != 4) {
-                return false;
+        int q = p + 16;
+        if (q + 6 <= lim && b.getInt(q) == 0x0006_1701) {
+            int presentation = b.getShort(q + 4) & 0xFFFF;
+            if (((presentation >> 2) & 3) == 3 || (presentation & 3) == 3) {
+                return -1;
             }
             q += 6;
         }
-        if (q + 8 <= limit && b.getInt(q) == 0x0008_0F03) {
-            width = b.getInt(q + 4);
-            q += 8;
+        if (q + 6 <= lim && b.getInt(q) == 0x0006_1A01) {
+            q += 6;
         }
-        if (q + 4 > limit) {
-            return false;
+        if (q + 12 <= lim && b.getInt(q) == 0x000C_1B05) {
+            if (!(Real8.decode(b.getLong(q + 4)) > 0)) {
+                return -1;
+            }
+            q += 12;
         }
-        int xyHeader = b.getInt(q);
-        int xyLength = xyHeader >>> 16;
-        if ((xyHeader & 0xFFFF) != 0x1003 || xyLength < 12 || ((xyLength - 4) & 7) != 0) {
-            return false;
+        if (q + 12 <= lim && b.getInt(q) == 0x000C_1C05) {
+            q += 12;
         }
-        int endel = q + xyLength;
-        if (endel + 4 > limit || b.getInt(endel) != 0x0004_1100) {
-            return false;
+        if (q + 16 > lim || b.getInt(q) != 0x000C_1003) {
+            return -1;
         }
-        int layer = b.getShort(p + 4);
-        int datatype = b.getShort(p + 10);
-        int values = (xyLength - 4) >> 2;
-        payloadStart = q + 4;
-        payloadLength = xyLength - 4;
-        copyXy(true, 6, values);
-        int at = dataLength;
-        data[at] = StreamCell.PATH << 28 | values >> 1;
-        data[at + 1] = layer << 16 | (datatype & 0xFFFF);
-        data[at + 2] = pathType;
-        data[at + 3] = width;
-        data[at + 4] = 0;
-        data[at + 5] = 0;
-        dataLength = at + 6 + values;
-        shapeCount++;
-        recordOffset = base + endel;
-        recordType = 0x11;
-        dataType = 0;
-        payloadStart = endel + 4;
-        payloadLength = 0;
-        return true;
+        q += 12;
+        int string = b.getInt(q);
+        int length = string >>> 16;
+        if ((string & 0xFFFF) != 0x1906 || length < 4 || (length & 1) != 0) {
+            return -1;
+        }
+        q += length;
+        if (q + 4 > lim || b.getInt(q) != 0x0004_1100) {
+            return -1;
+        }
+        return q;
+    }
+
+    /**
+     * Makes room for {@code more} values after {@link #dataLength}: a new chunk, into which the
+     * current cell's shapes so far are moved (so that a cell's shapes stay in one array). Near the
+     * part's end the chunk is sized for the bytes left: a shape takes at most about as many bytes
+     * in the chunk as in the file.
+     */
+    private void grow(int more) {
+        int cellSoFar = dataLength - cellStart;
+        long left = Math.max(0, partEnd - (base + payloadStart));
+        int size = (int) Math.max(chunkFor(left + (1 << 18)), 2L * (cellSoFar + more));
+        int[] chunk = new int[size];
+        System.arraycopy(data, cellStart, chunk, 0, cellSoFar);
+        data = chunk;
+        cellStart = 0;
+        dataLength = cellSoFar;
+        chunkFirstCell = cells.size();
+    }
+
+    /**
+     * Gives the cells in the last chunk an array of the size they use when much of the chunk is
+     * empty, so that the parts' unused chunk ends do not add up to much.
+     */
+    private void trimLastChunk() {
+        int unused = data.length - dataLength;
+        if (unused <= data.length / 4 || unused < 1024 || chunkFirstCell == cells.size()) {
+            return;
+        }
+        int[] exact = Arrays.copyOf(data, dataLength);
+        for (int i = chunkFirstCell; i < cells.size(); i++) {
+            StreamCell c = cells.get(i);
+            cells.set(i, new StreamCell(c.name(), c.offset(), exact, c.shapeStart(), c.shapeEnd(), c.shapeCount(),
+                    c.referenceData(), c.referenceTransforms(), c.textCount()));
+        }
+        data = exact;
     }
 
     /** Copies the XY payload: for shapes into {@link #data} after the header, else to the scratch array. */
@@ -761,15 +1276,8 @@ public final class GdsStreamReader {
         int[] target;
         int at;
         if (shape) {
-            int need = dataLength + header + values;
-            if (need > data.length) {
-                int cellSoFar = dataLength - cellStart;
-                int size = Math.max(firstChunk(), 2 * (cellSoFar + header + values));
-                int[] chunk = new int[size];
-                System.arraycopy(data, cellStart, chunk, 0, cellSoFar);
-                data = chunk;
-                cellStart = 0;
-                dataLength = cellSoFar;
+            if (dataLength + header + values > data.length) {
+                grow(header + values);
             }
             target = data;
             at = dataLength + header;
@@ -788,54 +1296,19 @@ public final class GdsStreamReader {
     }
 
     private int pitch(long span, int count) {
-        if (span % count != 0) {
+        if (GdsReadChecks.isPitchRounded(span, count)) {
             roundedPitches++;
         }
-        return (int) Math.round((double) span / count);
+        return GdsReadChecks.pitch(span, count);
     }
 
     private void requireLayer(int layer, long start, String kind) throws GdsFormatException {
-        if (layer == NO_LAYER) {
-            throw new GdsFormatException(file, start, kind + " element without LAYER");
-        }
+        GdsReadChecks.requireLayer(file, layer, start, kind);
     }
 
     private void requirePoints(boolean ok, long start, String kind, int points, String expected)
             throws GdsFormatException {
-        if (!ok) {
-            throw new GdsFormatException(file, start, kind + " element has " + points + " points in XY, expected "
-                    + expected);
-        }
-    }
-
-    /**
-     * Replaces name ids by indexes into the cell list; a reference to a name no structure defines
-     * fails at its first SNAME in file order, as GdsReader reports it.
-     */
-    private List<StreamCell> resolveReferences(List<StreamCell> cells, List<Integer> cellIds) throws GdsFormatException {
-        int[] indexOfName = new int[names.size()];
-        Arrays.fill(indexOfName, -1);
-        for (int i = 0; i < cellIds.size(); i++) {
-            indexOfName[cellIds.get(i)] = i;
-        }
-        int missing = -1;
-        for (int id = 0; id < names.size(); id++) {
-            if (indexOfName[id] < 0 && names.referencedAt(id) >= 0
-                    && (missing < 0 || names.referencedAt(id) < names.referencedAt(missing))) {
-                missing = id;
-            }
-        }
-        if (missing >= 0) {
-            throw new GdsFormatException(file, names.referencedAt(missing), "cell '" + names.name(names.referencedBy(missing))
-                    + "' references missing cell '" + names.name(missing) + "'");
-        }
-        for (StreamCell c : cells) {
-            int[] r = c.referenceData();
-            for (int i = 0; i < r.length; i += StreamCell.REF_STRIDE) {
-                r[i] = indexOfName[r[i]];
-            }
-        }
-        return cells;
+        GdsReadChecks.requirePoints(file, ok, start, kind, points, expected);
     }
 
     /**
@@ -933,12 +1406,13 @@ public final class GdsStreamReader {
 
     /**
      * Structure names, found by their bytes in the buffer without building a string (open
-     * addressing); per name: where it was defined and its first reference.
+     * addressing); per name: where it was defined and its first reference, in this part.
      */
     private static final class NameTable {
         private byte[][] bytes = new byte[64][];
         private String[] strings = new String[64];
         private long[] definedAt = new long[64];
+        private long[] namedAt = new long[64];
         private long[] referencedAt = new long[64];
         private int[] referencedBy = new int[64];
         private int size;
@@ -960,8 +1434,14 @@ public final class GdsStreamReader {
             return definedAt[id];
         }
 
-        void define(int id, long offset) {
+        /** Defines a name: its structure's BGNSTR and its STRNAME record are at the given offsets. */
+        void define(int id, long offset, long strnameOffset) {
             definedAt[id] = offset;
+            namedAt[id] = strnameOffset;
+        }
+
+        long namedAt(int id) {
+            return namedAt[id];
         }
 
         long referencedAt(int id) {
@@ -1016,6 +1496,7 @@ public final class GdsStreamReader {
                 bytes = Arrays.copyOf(bytes, cap);
                 strings = Arrays.copyOf(strings, cap);
                 definedAt = Arrays.copyOf(definedAt, cap);
+                namedAt = Arrays.copyOf(namedAt, cap);
                 referencedAt = Arrays.copyOf(referencedAt, cap);
                 referencedBy = Arrays.copyOf(referencedBy, cap);
             }

@@ -4,12 +4,14 @@
  */
 package org.apertura.layout.tests.stream;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.fail;
 
 import java.io.ByteArrayInputStream;
 import java.io.IOException;
+import java.util.Arrays;
 import java.util.List;
 
 import org.apertura.layout.flatten.FlattenOptions;
@@ -30,25 +32,107 @@ import org.apertura.layout.stream.GdsStreamReader;
 import org.apertura.layout.stream.StreamCell;
 import org.apertura.layout.stream.StreamFlattener;
 import org.apertura.layout.stream.StreamLayout;
+import org.apertura.layout.stream.StreamReadOptions;
 
 /**
  * Checks that the streaming path ({@link GdsStreamReader}, {@link StreamFlattener}) and the EMF path
  * ({@link GdsReader}, {@link Flattener}) agree: the same cells, top cells, warnings and flattened
- * polygons, or the same exception (file, byte offset, problem).
+ * polygons, or the same exception (file, byte offset, problem). Every streaming read is also done
+ * with the input cut into several parts parsed by several threads ({@link #PARALLEL_THREADS}, parts
+ * forced even for tiny inputs), which must give an identical layout or the identical first error.
  */
 public final class StreamEquivalence {
 
+    /** Thread counts of the parallel reads compared with the sequential one. */
+    public static final int[] PARALLEL_THREADS = {2, 3, 5};
+
     private StreamEquivalence() {
+    }
+
+    /** Read with {@code threads} threads and the input cut into that many parts however small it is. */
+    public static StreamReadOptions forcedParts(int threads) {
+        return StreamReadOptions.DEFAULTS.withThreads(threads).withMinBytesPerThread(0);
+    }
+
+    /** Read sequentially on the calling thread. */
+    public static StreamReadOptions sequential() {
+        return StreamReadOptions.DEFAULTS.withThreads(1);
     }
 
     /** Both readers reject the bytes with the same file, offset and problem; returns the EMF reader's exception. */
     public static GdsFormatException bothFail(byte[] bytes, String fileName) {
         GdsFormatException emf = assertThrows(GdsFormatException.class,
                 () -> GdsReader.read(new ByteArrayInputStream(bytes), fileName));
-        GdsFormatException stream = assertThrows(GdsFormatException.class, () -> GdsStreamReader.read(bytes, fileName),
+        GdsFormatException stream = assertThrows(GdsFormatException.class,
+                () -> GdsStreamReader.read(bytes, fileName, sequential()),
                 "the streaming reader accepts what GdsReader rejects: " + emf.getMessage());
         assertSameFailure(emf, stream);
+        for (int threads : PARALLEL_THREADS) {
+            GdsFormatException parallel = assertThrows(GdsFormatException.class,
+                    () -> GdsStreamReader.read(bytes, fileName, forcedParts(threads)),
+                    threads + " threads accept what GdsReader rejects: " + emf.getMessage());
+            assertSameFailure(emf, parallel);
+        }
         return emf;
+    }
+
+    /**
+     * Reads the bytes sequentially and with every count of {@link #PARALLEL_THREADS}: all fail with
+     * the same exception (which is thrown) or all give identical layouts (the sequential one is returned).
+     */
+    public static StreamLayout readEveryWay(byte[] bytes, String fileName) throws GdsFormatException {
+        StreamLayout expected;
+        try {
+            expected = GdsStreamReader.read(bytes, fileName, sequential());
+        } catch (GdsFormatException e) {
+            for (int threads : PARALLEL_THREADS) {
+                GdsFormatException parallel = assertThrows(GdsFormatException.class,
+                        () -> GdsStreamReader.read(bytes, fileName, forcedParts(threads)),
+                        threads + " threads accept what one thread rejects: " + e.getMessage());
+                assertSameFailure(e, parallel);
+            }
+            throw e;
+        } catch (IOException e) {
+            throw new AssertionError(e);
+        }
+        for (int threads : PARALLEL_THREADS) {
+            StreamLayout parallel;
+            try {
+                parallel = GdsStreamReader.read(bytes, fileName, forcedParts(threads));
+            } catch (IOException e) {
+                throw new AssertionError(threads + " threads reject what one thread accepts: " + e.getMessage(), e);
+            }
+            assertIdentical(expected, parallel, threads + " threads");
+        }
+        return expected;
+    }
+
+    /**
+     * Identical streaming layouts: name, units, warnings, skipped records, and per cell in order the
+     * name, offset, counts, packed shape values, references and transforms; the same top cells.
+     */
+    public static void assertIdentical(StreamLayout expected, StreamLayout actual, String label) {
+        assertEquals(expected.name(), actual.name(), label);
+        assertEquals(expected.userUnitsPerDatabaseUnit(), actual.userUnitsPerDatabaseUnit(), label);
+        assertEquals(expected.metresPerDatabaseUnit(), actual.metresPerDatabaseUnit(), label);
+        assertEquals(expected.warnings(), actual.warnings(), label);
+        assertEquals(expected.skippedRecords(), actual.skippedRecords(), label);
+        assertEquals(expected.cells().size(), actual.cells().size(), label + ": structures");
+        for (int i = 0; i < expected.cells().size(); i++) {
+            StreamCell e = expected.cells().get(i);
+            StreamCell a = actual.cells().get(i);
+            String where = label + ": cell " + i + " " + e.name();
+            assertEquals(e.name(), a.name(), where);
+            assertEquals(e.offset(), a.offset(), where);
+            assertEquals(e.shapeCount(), a.shapeCount(), where);
+            assertEquals(e.textCount(), a.textCount(), where);
+            assertArrayEquals(Arrays.copyOfRange(e.shapeData(), e.shapeStart(), e.shapeEnd()),
+                    Arrays.copyOfRange(a.shapeData(), a.shapeStart(), a.shapeEnd()), where + " shapes");
+            assertArrayEquals(e.referenceData(), a.referenceData(), where + " references");
+            assertArrayEquals(e.referenceTransforms(), a.referenceTransforms(), where + " transforms");
+        }
+        assertEquals(expected.topCells().stream().map(StreamCell::offset).toList(),
+                actual.topCells().stream().map(StreamCell::offset).toList(), label + ": top cells");
     }
 
     /** Same file, offset, problem and message. */
@@ -68,7 +152,7 @@ public final class StreamEquivalence {
         try {
             emf = GdsReader.read(new ByteArrayInputStream(bytes), fileName);
         } catch (GdsFormatException e) {
-            GdsFormatException s = assertThrows(GdsFormatException.class, () -> GdsStreamReader.read(bytes, fileName),
+            GdsFormatException s = assertThrows(GdsFormatException.class, () -> readEveryWay(bytes, fileName),
                     "the streaming reader accepts what GdsReader rejects: " + e.getMessage());
             assertSameFailure(e, s);
             return null;
@@ -77,7 +161,7 @@ public final class StreamEquivalence {
         }
         StreamLayout stream;
         try {
-            stream = GdsStreamReader.read(bytes, fileName);
+            stream = readEveryWay(bytes, fileName);
         } catch (IOException e) {
             throw new AssertionError("the streaming reader rejects what GdsReader accepts: " + e.getMessage(), e);
         }
