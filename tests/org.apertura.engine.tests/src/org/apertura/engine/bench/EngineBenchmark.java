@@ -139,7 +139,10 @@ public final class EngineBenchmark {
                     notes.add(why + "; NOT RUN (--jts-bound 0), no JTS figure for this size.");
                 } else {
                     double bounded = boundedJts(n, jtsBound);
-                    if (Double.isFinite(bounded)) {
+                    if (Double.isNaN(bounded)) {
+                        notes.add(why + "; so it ran in a separate JVM, which ended without a time (see the error"
+                                + " output): no JTS figure for this size.");
+                    } else if (Double.isFinite(bounded)) {
                         jtsS = bounded;
                         notes.add(String.format("%s; so it ran in a separate JVM bounded to %.0f s (--jts-bound) and finished"
                                 + " in %.1f s (measured).", why, jtsBound, bounded));
@@ -173,7 +176,8 @@ public final class EngineBenchmark {
 
     /**
      * Runs the JTS checker on the layout of size n in a child JVM (same Java, class path and heap limit);
-     * returns its time in seconds, or infinity when it was stopped after {@code boundSeconds}.
+     * returns its time in seconds, infinity when it was stopped after {@code boundSeconds}, NaN when it
+     * ended without printing a time.
      */
     private static double boundedJts(int n, double boundSeconds) throws Exception {
         String javaCommand = ProcessHandle.current().info().command().orElse("java");
@@ -204,7 +208,9 @@ public final class EngineBenchmark {
                 return Double.parseDouble(line.substring(6).trim());
             }
         }
-        throw new IllegalStateException("JTS child run printed no time (exit " + child.exitValue() + "): " + output);
+        // ended without a time (out of memory, say): no figure
+        System.err.println("JTS child run printed no time (exit " + child.exitValue() + "): " + output);
+        return Double.NaN;
     }
 
     private static List<Rule> rules(String layer) {
