@@ -4,6 +4,7 @@
  */
 package org.apertura.layout.gds;
 
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -37,6 +38,21 @@ public final class GdsReadChecks {
     public static String roundedPitchesWarning(int count) {
         return count > 0 ? count + " array references whose span is not a multiple of the count: pitch rounded"
                 : null;
+    }
+
+    /**
+     * Adds the end-of-read warnings to a reader's list: skipped records first, rounded array pitches
+     * last, so both readers list warnings in the same order.
+     */
+    public static void addEndWarnings(List<String> warnings, Map<String, Integer> skipped, int roundedPitches) {
+        String skippedWarning = skippedRecordsWarning(skipped);
+        if (skippedWarning != null) {
+            warnings.add(0, skippedWarning);
+        }
+        String pitchWarning = roundedPitchesWarning(roundedPitches);
+        if (pitchWarning != null) {
+            warnings.add(pitchWarning);
+        }
     }
 
     /** The warning for non-zero bytes after ENDLIB (zero padding is normal), or null for none. */

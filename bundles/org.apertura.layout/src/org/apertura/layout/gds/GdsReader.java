@@ -146,14 +146,7 @@ public final class GdsReader {
             throw new GdsFormatException(in.file(), cellOffsets.get(cycle.get(0)),
                     "cyclic cell references: " + CellHierarchy.path(cycle));
         }
-        String skippedWarning = GdsReadChecks.skippedRecordsWarning(skipped);
-        if (skippedWarning != null) {
-            warnings.add(0, skippedWarning);
-        }
-        String pitchWarning = GdsReadChecks.roundedPitchesWarning(roundedPitches);
-        if (pitchWarning != null) {
-            warnings.add(pitchWarning);
-        }
+        GdsReadChecks.addEndWarnings(warnings, skipped, roundedPitches);
         return new GdsReadResult(library, topCells(cells), skipped, warnings);
     }
 

@@ -524,14 +524,7 @@ public final class GdsStreamReader {
                 }
                 throw new GdsFormatException(file, cycle.get(0).offset(), "cyclic cell references: " + path);
             }
-            String skippedWarning = GdsReadChecks.skippedRecordsWarning(skipped);
-            if (skippedWarning != null) {
-                warnings.add(0, skippedWarning);
-            }
-            String pitchWarning = GdsReadChecks.roundedPitchesWarning(roundedPitches);
-            if (pitchWarning != null) {
-                warnings.add(pitchWarning);
-            }
+            GdsReadChecks.addEndWarnings(warnings, skipped, roundedPitches);
             boolean[] referenced = new boolean[cells.size()];
             for (StreamCell c : cells) {
                 int[] r = c.referenceData();

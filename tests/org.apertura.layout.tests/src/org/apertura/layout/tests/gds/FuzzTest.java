@@ -14,7 +14,6 @@ import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.time.Duration;
-import java.util.Arrays;
 import java.util.Random;
 import java.util.stream.Stream;
 
@@ -67,7 +66,7 @@ class FuzzTest {
         int models = 0;
         int rejected = 0;
         for (int i = 0; i < MUTANTS_PER_FILE; i++) {
-            byte[] mutant = mutate(original, random);
+            byte[] mutant = GdsBytes.mutate(original, random);
             String label = name + " mutant " + i + " (seed " + seed + ")";
             boolean[] ok = new boolean[1];
             assertTimeoutPreemptively(Duration.ofSeconds(20), () -> ok[0] = exercise(mutant, label), label);
@@ -129,38 +128,5 @@ class FuzzTest {
             throw new AssertionError(label + ": rewritten file unreadable: " + e.getMessage(), e);
         }
         return true;
-    }
-
-    private static byte[] mutate(byte[] original, Random random) {
-        byte[] b = original.clone();
-        switch (random.nextInt(5)) {
-            case 0 -> { // a few random bytes
-                int n = 1 + random.nextInt(4);
-                for (int k = 0; k < n; k++) {
-                    b[random.nextInt(b.length)] = (byte) random.nextInt(256);
-                }
-            }
-            case 1 -> { // one byte of a record header region set to an extreme value
-                b[random.nextInt(b.length)] = (byte) (random.nextBoolean() ? 0x00 : 0xFF);
-            }
-            case 2 -> b = Arrays.copyOf(b, random.nextInt(b.length)); // truncation
-            case 3 -> { // delete a range
-                int from = random.nextInt(b.length);
-                int len = 1 + random.nextInt(Math.min(64, b.length - from));
-                byte[] c = new byte[b.length - len];
-                System.arraycopy(b, 0, c, 0, from);
-                System.arraycopy(b, from + len, c, from, b.length - from - len);
-                b = c;
-            }
-            default -> { // duplicate a range
-                int from = random.nextInt(b.length);
-                int len = 1 + random.nextInt(Math.min(64, b.length - from));
-                byte[] c = new byte[b.length + len];
-                System.arraycopy(b, 0, c, 0, from + len);
-                System.arraycopy(b, from, c, from + len, b.length - from);
-                b = c;
-            }
-        }
-        return b;
     }
 }

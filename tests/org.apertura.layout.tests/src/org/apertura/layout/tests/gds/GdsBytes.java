@@ -115,4 +115,51 @@ public final class GdsBytes {
     public byte[] bytes() {
         return out.toByteArray();
     }
+
+    /**
+     * A random mutant of a stream file: a few random bytes, one byte set to 0x00 or 0xFF, a
+     * truncation, or a range of up to 64 bytes deleted or duplicated.
+     */
+    public static byte[] mutate(byte[] original, java.util.Random random) {
+        byte[] b = original.clone();
+        switch (random.nextInt(5)) {
+            case 0 -> { // a few random bytes
+                int n = 1 + random.nextInt(4);
+                for (int k = 0; k < n; k++) {
+                    b[random.nextInt(b.length)] = (byte) random.nextInt(256);
+                }
+            }
+            case 1 -> { // one byte of a record header region set to an extreme value
+                b[random.nextInt(b.length)] = (byte) (random.nextBoolean() ? 0x00 : 0xFF);
+            }
+            case 2 -> b = java.util.Arrays.copyOf(b, random.nextInt(b.length)); // truncation
+            case 3 -> { // delete a range
+                int from = random.nextInt(b.length);
+                int len = 1 + random.nextInt(Math.min(64, b.length - from));
+                byte[] c = new byte[b.length - len];
+                System.arraycopy(b, 0, c, 0, from);
+                System.arraycopy(b, from + len, c, from, b.length - from - len);
+                b = c;
+            }
+            default -> { // duplicate a range
+                int from = random.nextInt(b.length);
+                int len = 1 + random.nextInt(Math.min(64, b.length - from));
+                byte[] c = new byte[b.length + len];
+                System.arraycopy(b, 0, c, 0, from + len);
+                System.arraycopy(b, from, c, from + len, b.length - from);
+                b = c;
+            }
+        }
+        return b;
+    }
+
+    /** The eight bytes of a GDSII 8-byte real (excess-64 base-16) for v. */
+    public static byte[] real8(double v) {
+        long bits = org.apertura.layout.gds.Real8.encode(v);
+        byte[] b = new byte[8];
+        for (int i = 0; i < 8; i++) {
+            b[i] = (byte) (bits >>> (56 - 8 * i));
+        }
+        return b;
+    }
 }

@@ -23,7 +23,6 @@ import java.util.stream.Stream;
 
 import org.apertura.layout.flatten.FlattenOptions;
 import org.apertura.layout.gds.GdsFormatException;
-import org.apertura.layout.gds.Real8;
 import org.apertura.layout.stream.GdsStreamReader;
 import org.apertura.layout.stream.StreamCell;
 import org.apertura.layout.stream.StreamLayout;
@@ -189,7 +188,7 @@ class ParallelReadTest {
         Random random = new Random(12);
         int rejected = 0;
         for (int i = 0; i < 150; i++) {
-            byte[] mutant = mutate(original, random);
+            byte[] mutant = GdsBytes.mutate(original, random);
             try {
                 StreamEquivalence.readEveryWay(mutant, "mutant.gds");
             } catch (GdsFormatException e) {
@@ -223,36 +222,6 @@ class ParallelReadTest {
             assertEquals(0x0D, bytes[layerRecord + 2], "LAYER record");
             bytes[layerRecord + 3] = 3;
         }
-    }
-
-    private static byte[] mutate(byte[] original, Random random) {
-        byte[] b = original.clone();
-        switch (random.nextInt(4)) {
-            case 0 -> {
-                int n = 1 + random.nextInt(4);
-                for (int k = 0; k < n; k++) {
-                    b[random.nextInt(b.length)] = (byte) random.nextInt(256);
-                }
-            }
-            case 1 -> b = Arrays.copyOf(b, random.nextInt(b.length));
-            case 2 -> {
-                int from = random.nextInt(b.length);
-                int len = 1 + random.nextInt(Math.min(64, b.length - from));
-                byte[] c = new byte[b.length - len];
-                System.arraycopy(b, 0, c, 0, from);
-                System.arraycopy(b, from + len, c, from, b.length - from - len);
-                b = c;
-            }
-            default -> {
-                int from = random.nextInt(b.length);
-                int len = 1 + random.nextInt(Math.min(64, b.length - from));
-                byte[] c = new byte[b.length + len];
-                System.arraycopy(b, 0, c, 0, from + len);
-                System.arraycopy(b, from, c, from + len, b.length - from);
-                b = c;
-            }
-        }
-        return b;
     }
 
     /**
@@ -321,10 +290,10 @@ class ParallelReadTest {
                         if (random.nextBoolean()) {
                             g.int16(0x1A, 1, random.nextBoolean() ? 0x8000 : 0);
                             if (random.nextInt(3) == 0) {
-                                g.record(0x1B, 5, real8(new double[] {2, 0.5}[random.nextInt(2)]));
+                                g.record(0x1B, 5, GdsBytes.real8(new double[] {2, 0.5}[random.nextInt(2)]));
                             }
                             if (random.nextInt(3) == 0) {
-                                g.record(0x1C, 5, real8(new double[] {90, 180, 45}[random.nextInt(3)]));
+                                g.record(0x1C, 5, GdsBytes.real8(new double[] {90, 180, 45}[random.nextInt(3)]));
                             }
                         }
                         if (array) {
@@ -348,14 +317,5 @@ class ParallelReadTest {
             g.endStructure();
         }
         return g.endLibrary().bytes();
-    }
-
-    private static byte[] real8(double v) {
-        long bits = Real8.encode(v);
-        byte[] b = new byte[8];
-        for (int i = 0; i < 8; i++) {
-            b[i] = (byte) (bits >>> (56 - 8 * i));
-        }
-        return b;
     }
 }

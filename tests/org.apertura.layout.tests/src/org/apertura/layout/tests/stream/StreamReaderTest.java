@@ -28,7 +28,6 @@ import org.apertura.layout.flatten.FlattenOptions;
 import org.apertura.layout.flatten.FlattenResult;
 import org.apertura.layout.gds.GdsReadResult;
 import org.apertura.layout.gds.GdsReader;
-import org.apertura.layout.gds.Real8;
 import org.apertura.layout.stream.GdsStreamReader;
 import org.apertura.layout.stream.StreamCell;
 import org.apertura.layout.stream.StreamFlattener;
@@ -222,11 +221,11 @@ class StreamReaderTest {
                         g.int16(0x1A, 1, strans);
                         double mag = new double[] {1, 1, 2, 0.5, 3}[random.nextInt(5)];
                         if (mag != 1 || random.nextBoolean()) {
-                            g.record(0x1B, 5, real8(mag));
+                            g.record(0x1B, 5, GdsBytes.real8(mag));
                         }
                         double angle = new double[] {0, 90, 180, 270, 45, 30, -90, 450}[random.nextInt(8)];
                         if (angle != 0) {
-                            g.record(0x1C, 5, real8(angle));
+                            g.record(0x1C, 5, GdsBytes.real8(angle));
                         }
                         if (array) {
                             int cols = 1 + random.nextInt(3);
@@ -250,14 +249,5 @@ class StreamReaderTest {
             file.hex(HexFormat.of().formatHex(b));
         }
         return file.endLibrary().bytes();
-    }
-
-    private static byte[] real8(double v) {
-        long bits = Real8.encode(v);
-        byte[] b = new byte[8];
-        for (int i = 0; i < 8; i++) {
-            b[i] = (byte) (bits >>> (56 - 8 * i));
-        }
-        return b;
     }
 }
