@@ -11,7 +11,9 @@ import java.util.function.BooleanSupplier;
  * How the engine runs: {@code threads} worker threads, a progress listener receiving (done, total)
  * work units from any thread, a cancellation flag polled between tiles (when it turns true the running
  * call throws {@link java.util.concurrent.CancellationException}), and the tile size as the number of
- * edges per tile. Results depend on none of these.
+ * edges per tile. A tile is one unit of parallel work: a run of that many edges in sorted order for the
+ * pair searches (each reads the shared edge index as far as the rule reaches, across tile borders), a
+ * square region holding about that many edges for the enclosure check. Results depend on none of these.
  */
 public record CheckOptions(int threads, ProgressListener progress, BooleanSupplier cancelled, int edgesPerTile) {
 
