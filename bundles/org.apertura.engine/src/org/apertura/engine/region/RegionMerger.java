@@ -8,6 +8,11 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collection;
 import java.util.List;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ForkJoinPool;
+import java.util.function.IntConsumer;
+import java.util.stream.IntStream;
 
 import org.apertura.engine.geom.Polygon;
 import org.locationtech.jts.geom.Coordinate;
@@ -117,19 +122,19 @@ public final class RegionMerger {
         for (int i = 0; i < mixed.size(); i++) {
             byCluster[fill[UnionFind.find(parent, i)]++] = mixed.get(i);
         }
-        int[] clusters = java.util.stream.IntStream.range(0, mixed.size()).filter(c -> count[c + 1] > count[c]).toArray();
+        int[] clusters = IntStream.range(0, mixed.size()).filter(c -> count[c + 1] > count[c]).toArray();
         Geometry[] unions = new Geometry[clusters.length];
-        java.util.function.IntConsumer unite = k -> unions[k] = UnaryUnionNG.union(
+        IntConsumer unite = k -> unions[k] = UnaryUnionNG.union(
                 gf.createGeometryCollection(Arrays.copyOfRange(byCluster, count[clusters[k]], count[clusters[k] + 1])),
                 gf.getPrecisionModel());
         if (threads > 1 && clusters.length >= 64) {
-            java.util.concurrent.ForkJoinPool pool = new java.util.concurrent.ForkJoinPool(threads);
+            ForkJoinPool pool = new ForkJoinPool(threads);
             try {
-                pool.submit(() -> java.util.stream.IntStream.range(0, clusters.length).parallel().forEach(unite)).get();
+                pool.submit(() -> IntStream.range(0, clusters.length).parallel().forEach(unite)).get();
             } catch (InterruptedException e) {
                 Thread.currentThread().interrupt();
-                throw new java.util.concurrent.CancellationException("interrupted while merging layer " + name);
-            } catch (java.util.concurrent.ExecutionException e) {
+                throw new CancellationException("interrupted while merging layer " + name);
+            } catch (ExecutionException e) {
                 throw e.getCause() instanceof RuntimeException re ? re : new IllegalStateException(e.getCause());
             } finally {
                 pool.shutdownNow();
