@@ -84,7 +84,6 @@ public final class CheckCommand implements Callable<Integer> {
         Run r = Run.of(spec);
         Set<ReportFormat> formats = reports.formats();
         Path folder = reports.folder("check-" + Outputs.stem(layout) + "-" + option);
-        Outputs.checkReplaceable(folder);
         try (ProgressPrinter progress = run.progress(r.err())) {
             return call(r, formats, folder, progress);
         }
@@ -128,9 +127,7 @@ public final class CheckCommand implements Callable<Integer> {
         progress.begin("writing the reports");
         List<String> files = Outputs.write(folder, data, formats, summary, Map.of());
         progress.end();
-        r.out().print(summary);
-        r.out().println("reports: " + folder + " (" + String.join(", ", files) + ")");
-        r.out().flush();
+        Outputs.announce(r, summary, folder, files);
         return data.openFindings().isEmpty() ? 0 : 1;
     }
 }

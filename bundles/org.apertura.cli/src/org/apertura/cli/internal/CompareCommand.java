@@ -75,8 +75,7 @@ public final class CompareCommand implements Callable<Integer> {
         Run r = Run.of(spec);
         Set<ReportFormat> formats = reports.formats();
         Path folder = reports.folder("compare-" + Outputs.stem(deck) + "-" + from + "-" + to);
-        Outputs.checkReplaceable(folder);
-        ResolvedDeck d = Inputs.deck(deck, quiet ? new java.io.PrintWriter(java.io.Writer.nullWriter()) : r.err());
+        ResolvedDeck d = Inputs.deck(deck, r.warnings(quiet));
         Inputs.option(deck, d, from);
         Inputs.option(deck, d, to);
         List<String> compared = layers.isEmpty() ? MigrationStudy.changedLayers(d, from, to)
@@ -91,9 +90,7 @@ public final class CompareCommand implements Callable<Integer> {
                 ReportContext.of(d, prov, compared, Set.copyOf(compared)));
         String summary = Summaries.comparison(d.technology(), from, to, deltas, optics, masks);
         List<String> files = Outputs.write(folder, data, formats, summary, Map.of());
-        r.out().print(summary);
-        r.out().println("reports: " + folder + " (" + String.join(", ", files) + ")");
-        r.out().flush();
+        Outputs.announce(r, summary, folder, files);
         return 0;
     }
 }

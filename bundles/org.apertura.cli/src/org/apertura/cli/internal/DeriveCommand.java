@@ -75,7 +75,7 @@ public final class DeriveCommand implements Callable<Integer> {
         if (Files.isDirectory(file)) {
             throw new InputException(file + ": is a folder; give a file name with --output");
         }
-        ResolvedDeck d = Inputs.deck(deck, quiet ? new java.io.PrintWriter(java.io.Writer.nullWriter()) : r.err());
+        ResolvedDeck d = Inputs.deck(deck, r.warnings(quiet));
         Inputs.option(deck, d, from);
         Inputs.option(deck, d, to);
         List<String> derived = layers.isEmpty() ? List.of() : Inputs.layers(deck, d, layers);

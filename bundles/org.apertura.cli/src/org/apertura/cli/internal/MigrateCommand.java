@@ -111,7 +111,6 @@ public final class MigrateCommand implements Callable<Integer> {
         Run r = Run.of(spec);
         Set<ReportFormat> formats = reports.formats();
         Path folder = reports.folder("migrate-" + Outputs.stem(layout) + "-" + from + "-" + to);
-        Outputs.checkReplaceable(folder);
         try (ProgressPrinter progress = run.progress(r.err())) {
             return call(r, formats, folder, progress);
         }
@@ -152,9 +151,7 @@ public final class MigrateCommand implements Callable<Integer> {
         List<String> files = Outputs.write(folder, data, formats, summary,
                 Map.of(STUDY_FILE, file -> StudyResources.save(StudyModels.toModel(result), file)));
         progress.end();
-        r.out().print(summary);
-        r.out().println("reports: " + folder + " (" + String.join(", ", files) + ")");
-        r.out().flush();
+        Outputs.announce(r, summary, folder, files);
         return hasOpenBreaks(data) ? 1 : 0;
     }
 

@@ -36,6 +36,13 @@ public final class Outputs {
     private Outputs() {
     }
 
+    /** Prints the summary and where the reports went, on standard output. */
+    static void announce(Run r, String summary, Path folder, List<String> files) {
+        r.out().print(summary);
+        r.out().println("reports: " + folder + " (" + String.join(", ", files) + ")");
+        r.out().flush();
+    }
+
     /**
      * Refuses an output folder that exists, is not empty and holds no {@value #SUMMARY}: replacing it would
      * delete files Apertura did not write. Call before the long work starts.

@@ -70,8 +70,7 @@ public final class RenderCommand implements Callable<Integer> {
         Run r = Run.of(spec);
         Set<ReportFormat> formats = reports.formats();
         Path folder = reports.folder("render-" + studyName(study));
-        Outputs.checkReplaceable(folder);
-        ResolvedDeck d = Inputs.deck(deck, quiet ? new java.io.PrintWriter(java.io.Writer.nullWriter()) : r.err());
+        ResolvedDeck d = Inputs.deck(deck, r.warnings(quiet));
         Inputs.requireFile(study, "study");
         Study s;
         try {
@@ -98,9 +97,7 @@ public final class RenderCommand implements Callable<Integer> {
         data = Waivers.apply(data, waivers.waivers());
         String summary = Summaries.migration(SummaryTable.render(result), data, waivers);
         List<String> files = Outputs.write(folder, data, formats, summary, Map.of());
-        r.out().print(summary);
-        r.out().println("reports: " + folder + " (" + String.join(", ", files) + ")");
-        r.out().flush();
+        Outputs.announce(r, summary, folder, files);
         return MigrateCommand.hasOpenBreaks(data) ? 1 : 0;
     }
 

@@ -36,8 +36,13 @@ public final class ReportOptions {
         }
     }
 
-    /** The output folder: as given, or {@value #DEFAULT_ROOT}/{@code defaultName}. */
-    Path folder(String defaultName) {
-        return out != null ? out : Path.of(DEFAULT_ROOT, Outputs.safeName(defaultName));
+    /**
+     * The output folder: as given, or {@value #DEFAULT_ROOT}/{@code defaultName}; refused before any work
+     * starts when it exists and was not written by Apertura ({@link Outputs#checkReplaceable}).
+     */
+    Path folder(String defaultName) throws InputException {
+        Path folder = out != null ? out : Path.of(DEFAULT_ROOT, Outputs.safeName(defaultName));
+        Outputs.checkReplaceable(folder);
+        return folder;
     }
 }

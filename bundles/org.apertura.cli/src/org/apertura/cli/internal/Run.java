@@ -38,4 +38,9 @@ public record Run(String version, PrintWriter out, PrintWriter err, List<String>
     static Run of(CommandSpec spec) {
         return ((Source) spec.root().userObject()).invocation();
     }
+
+    /** Where warnings go: standard error, or nowhere in quiet mode. */
+    PrintWriter warnings(boolean quiet) {
+        return quiet ? new PrintWriter(java.io.Writer.nullWriter()) : err;
+    }
 }
