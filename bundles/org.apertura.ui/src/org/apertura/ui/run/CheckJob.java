@@ -15,7 +15,6 @@ import org.apertura.rules.resolved.ResolvedDeck;
 import org.apertura.ui.findings.Review;
 import org.apertura.ui.findings.ReviewSession;
 import org.apertura.ui.internal.Preferences;
-import org.apertura.ui.layout.LayerNames;
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.IStatus;
 import org.eclipse.core.runtime.Status;
@@ -43,12 +42,9 @@ public final class CheckJob extends Job {
 
     @Override
     protected IStatus run(IProgressMonitor monitor) {
-        SubMonitor sub = SubMonitor.convert(monitor, getName(), 10 + EngineProgress.ticks());
+        SubMonitor sub = SubMonitor.convert(monitor, getName(), JobSteps.DECK_TICKS + EngineProgress.ticks());
         try {
-            sub.subTask("Loading " + deck.getFileName());
-            ResolvedDeck resolved = LayoutCheck.loadDeck(deck);
-            LayerNames.useDeck(resolved);
-            sub.worked(10);
+            ResolvedDeck resolved = JobSteps.loadDeck(deck, sub);
             sub.subTask("Checking");
             findings = LayoutCheck.check(resolved, layout, option,
                     EngineProgress.options(Preferences.threads(), sub.newChild(EngineProgress.ticks())));
