@@ -90,14 +90,14 @@ public final class Flattener {
         long n = 0;
         for (Element e : cell.getElements()) {
             if (e instanceof CellReference ref) {
-                long child = saturatingAdd(cost(ref.getCell(), roundSegments, memo), 1);
-                n = saturatingAdd(n, saturatingMultiply(child, CellHierarchy.instanceCount(ref)));
+                long child = Saturating.add(cost(ref.getCell(), roundSegments, memo), 1);
+                n = Saturating.add(n, Saturating.multiply(child, CellHierarchy.instanceCount(ref)));
             } else if (e instanceof Boundary b) {
-                n = saturatingAdd(n, size(b.getPoints()));
+                n = Saturating.add(n, size(b.getPoints()));
             } else if (e instanceof Box b) {
-                n = saturatingAdd(n, size(b.getPoints()));
+                n = Saturating.add(n, size(b.getPoints()));
             } else if (e instanceof Path p) {
-                n = saturatingAdd(n, 2L * size(p.getPoints()) + 2L * roundSegments + 4);
+                n = Saturating.add(n, 2L * size(p.getPoints()) + 2L * roundSegments + 4);
             }
         }
         memo.put(cell, n);
@@ -106,18 +106,6 @@ public final class Flattener {
 
     private static long size(PointList points) {
         return points == null ? 0 : points.size();
-    }
-
-    private static long saturatingAdd(long a, long b) {
-        long r = a + b;
-        return r < 0 ? Long.MAX_VALUE : r;
-    }
-
-    private static long saturatingMultiply(long a, long b) {
-        if (a == 0 || b <= 0) {
-            return 0;
-        }
-        return a > Long.MAX_VALUE / b ? Long.MAX_VALUE : a * b;
     }
 
     private void expand(Cell cell, Placing placing) {
@@ -130,12 +118,7 @@ public final class Flattener {
             }
             // absolute width: place the centre line, then draw the outline at the stored width
             Path path = s.absolutePath;
-            long[] centre = placing.apply(s.vertices, cellPath, tally);
-            int[] placed = new int[centre.length];
-            for (int i = 0; i < centre.length; i++) {
-                placed[i] = (int) centre[i];
-            }
-            long[] outline = PathOutline.outline(PointList.wrap(placed), Math.abs((double) path.getWidth()) / 2.0,
+            long[] outline = PathOutline.outlinePlaced(placing.apply(s.vertices, cellPath, tally), path.getWidth(),
                     path.getPathType(), path.getBeginExtension(), path.getEndExtension(), options.roundSegments());
             if (outline == null) {
                 skipped++;

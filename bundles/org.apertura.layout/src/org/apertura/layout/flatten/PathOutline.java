@@ -47,6 +47,21 @@ public final class PathOutline {
     }
 
     /**
+     * Outline of a path with an absolute width whose centre line was placed first (a placement scales
+     * and turns the centre line but not the width): the placed centre line as interleaved coordinates,
+     * which the placement has checked to fit in 32 bits, and the path's own width (sign ignored).
+     */
+    public static long[] outlinePlaced(long[] centre, int width, PathType type, double beginExtension,
+            double endExtension, int roundSegments) {
+        int[] placed = new int[centre.length];
+        for (int i = 0; i < centre.length; i++) {
+            placed[i] = (int) centre[i];
+        }
+        return outline(PointList.wrap(placed), Math.abs((double) width) / 2.0, type, beginExtension, endExtension,
+                roundSegments);
+    }
+
+    /**
      * Outline of a centre line with the given half width.
      *
      * @param halfWidth     half the width in database units

@@ -22,6 +22,7 @@ import org.apertura.layout.flatten.FlattenOptions;
 import org.apertura.layout.flatten.FlattenResult;
 import org.apertura.layout.flatten.Flattener;
 import org.apertura.layout.flatten.PathOutline;
+import org.apertura.layout.flatten.Saturating;
 import org.apertura.layout.flatten.Placing;
 import org.apertura.layout.hierarchy.LayoutHierarchyException;
 import org.apertura.layout.model.PathType;
@@ -167,30 +168,18 @@ public final class StreamFlattener {
             int kind = StreamCell.kind(header);
             int points = StreamCell.pointCount(header);
             if (kind == StreamCell.PATH) {
-                n = saturatingAdd(n, 2L * points + 2L * roundSegments + 4);
+                n = Saturating.add(n, 2L * points + 2L * roundSegments + 4);
             } else {
-                n = saturatingAdd(n, points);
+                n = Saturating.add(n, points);
             }
             i += StreamCell.headerSize(kind) + 2 * points;
         }
         for (; ri < r.length; ri += StreamCell.REF_STRIDE) {
-            long child = saturatingAdd(cost(layout, r[ri], roundSegments, memo), 1);
-            n = saturatingAdd(n, saturatingMultiply(child, (long) r[ri + 4] * r[ri + 5]));
+            long child = Saturating.add(cost(layout, r[ri], roundSegments, memo), 1);
+            n = Saturating.add(n, Saturating.multiply(child, (long) r[ri + 4] * r[ri + 5]));
         }
         memo[cell] = n;
         return n;
-    }
-
-    private static long saturatingAdd(long a, long b) {
-        long r = a + b;
-        return r < 0 ? Long.MAX_VALUE : r;
-    }
-
-    private static long saturatingMultiply(long a, long b) {
-        if (a == 0 || b <= 0) {
-            return 0;
-        }
-        return a > Long.MAX_VALUE / b ? Long.MAX_VALUE : a * b;
     }
 
     private void expand(int cellIndex, Placing placing) {
@@ -202,12 +191,7 @@ public final class StreamFlattener {
                 list.add(Polygon.of(placing.apply(s.vertices, cellPath, tally)));
                 continue;
             }
-            long[] centre = placing.apply(s.vertices, cellPath, tally);
-            int[] placed = new int[centre.length];
-            for (int i = 0; i < centre.length; i++) {
-                placed[i] = (int) centre[i];
-            }
-            long[] outline = PathOutline.outline(PointList.wrap(placed), Math.abs((double) s.width) / 2.0, s.pathType,
+            long[] outline = PathOutline.outlinePlaced(placing.apply(s.vertices, cellPath, tally), s.width, s.pathType,
                     s.bgnExtn, s.endExtn, options.roundSegments());
             if (outline == null) {
                 skipped++;
