@@ -38,12 +38,22 @@ public record RuleDelta(String layer, String rule, AxisScope axis, String unit, 
 
     /** {@code new - old}, empty unless both are present. */
     public OptionalDouble difference() {
-        return oldValue.isPresent() && newValue.isPresent()
-                ? OptionalDouble.of(newValue.getAsDouble() - oldValue.getAsDouble()) : OptionalDouble.empty();
+        return difference(oldValue, newValue);
     }
 
     /** {@code new / old}, empty unless both are present and old is not zero. */
     public OptionalDouble ratio() {
+        return ratio(oldValue, newValue);
+    }
+
+    /** {@code newValue - oldValue}, empty unless both are present. */
+    public static OptionalDouble difference(OptionalDouble oldValue, OptionalDouble newValue) {
+        return oldValue.isPresent() && newValue.isPresent()
+                ? OptionalDouble.of(newValue.getAsDouble() - oldValue.getAsDouble()) : OptionalDouble.empty();
+    }
+
+    /** {@code newValue / oldValue}, empty unless both are present and the old value is not zero. */
+    public static OptionalDouble ratio(OptionalDouble oldValue, OptionalDouble newValue) {
         return oldValue.isPresent() && newValue.isPresent() && oldValue.getAsDouble() != 0
                 ? OptionalDouble.of(newValue.getAsDouble() / oldValue.getAsDouble()) : OptionalDouble.empty();
     }

@@ -7,6 +7,8 @@ package org.apertura.report.model;
 import java.util.Objects;
 import java.util.OptionalDouble;
 
+import org.apertura.migrate.delta.RuleDelta;
+
 /**
  * One cell of the layer &times; rule matrix: a rule of one layer under the source and the target option.
  *
@@ -46,13 +48,11 @@ public record MatrixRow(String layer, String rule, String axis, ValueUnit unit, 
 
     /** {@code new - old}, empty unless both are present. */
     public OptionalDouble difference() {
-        return oldValue.isPresent() && newValue.isPresent()
-                ? OptionalDouble.of(newValue.getAsDouble() - oldValue.getAsDouble()) : OptionalDouble.empty();
+        return RuleDelta.difference(oldValue, newValue);
     }
 
     /** {@code new / old}, empty unless both are present and old is not zero. */
     public OptionalDouble ratio() {
-        return oldValue.isPresent() && newValue.isPresent() && oldValue.getAsDouble() != 0
-                ? OptionalDouble.of(newValue.getAsDouble() / oldValue.getAsDouble()) : OptionalDouble.empty();
+        return RuleDelta.ratio(oldValue, newValue);
     }
 }
