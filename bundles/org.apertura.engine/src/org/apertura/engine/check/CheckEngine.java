@@ -106,7 +106,8 @@ public final class CheckEngine {
     }
 
     private static List<Violation> checkMerged(Map<String, MergedLayer> layers, List<? extends Rule> rules, Exec exec) {
-        // the indexes of all layers searched by edge pairs, built in parallel (one layer per thread)
+        // the indexes of all layers searched by edge pairs (kept with the layers), built in parallel, one layer
+        // per thread, unless the merge built them already
         Set<String> searched = new TreeSet<>();
         for (Rule rule : rules) {
             layer(layers, rule.layer(), rule);
@@ -119,29 +120,26 @@ public final class CheckEngine {
         }
         List<String> names = new ArrayList<>(searched);
         exec.expect(names.size());
-        List<EdgeIndex> built = exec.map(names.size(), i -> List.of(index(layers.get(names.get(i)))));
-        Map<String, EdgeIndex> indexes = new TreeMap<>();
-        for (int i = 0; i < names.size(); i++) {
-            indexes.put(names.get(i), built.get(i));
-        }
+        exec.map(names.size(), i -> {
+            index(layers.get(names.get(i)));
+            return List.of();
+        });
         List<Violation> all = new ArrayList<>();
         for (Rule rule : rules) {
             exec.checkCancelled();
             MergedLayer layer = layer(layers, rule.layer(), rule);
-            EdgeIndex index = indexes.computeIfAbsent(rule.layer(), k -> index(layer));
             switch (rule) {
-                case WidthRule r -> all.addAll(width(layer, index, r, exec));
-                case SpacingRule r -> all.addAll(spacing(layer, index, r, exec));
-                case PitchRule r -> all.addAll(pitch(layer, index, r, exec));
-                case EndOfLineRule r -> all.addAll(endOfLine(layer, index, r, exec));
+                case WidthRule r -> all.addAll(width(layer, index(layer), r, exec));
+                case SpacingRule r -> all.addAll(spacing(layer, index(layer), r, exec));
+                case PitchRule r -> all.addAll(pitch(layer, index(layer), r, exec));
+                case EndOfLineRule r -> all.addAll(endOfLine(layer, index(layer), r, exec));
                 case AreaRule r -> all.addAll(area(layer, r));
                 case EnclosureRule r -> {
                     MergedLayer outer = layer(layers, r.outerLayer(), rule);
-                    EdgeIndex outerIndex = indexes.computeIfAbsent(r.outerLayer(), k -> index(outer));
-                    all.addAll(enclosure(layer, outer, outerIndex, r, exec));
+                    all.addAll(enclosure(layer, outer, index(outer), r, exec));
                 }
                 case DensityRule r -> all.addAll(density(layer, r, extent(layers)));
-                case MaskRule r -> all.addAll(maskConflicts(layer, index, r, exec));
+                case MaskRule r -> all.addAll(maskConflicts(layer, index(layer), r, exec));
             }
         }
         all.sort(Violation.ORDER);

@@ -106,7 +106,7 @@ public final class EngineBenchmark {
             long mergedEdges = 0, bytes = 0;
             for (MergedLayer m : merged.values()) {
                 mergedEdges += m.edgeCount();
-                bytes += m.retainedBytes() + new EdgeIndex(m).retainedBytes();
+                bytes += m.retainedBytes() + m.derived(EdgeIndex.class, EdgeIndex::new).retainedBytes();
             }
             System.gc();
             long after = usedHeap();
