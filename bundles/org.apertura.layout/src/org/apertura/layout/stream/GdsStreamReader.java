@@ -50,7 +50,8 @@ import org.apertura.layout.gds.Real8;
  * {@link GdsFormatException} has the same file name, byte offset and problem text, and the skipped
  * record counts and warnings are the same. Text elements, properties and dates are checked as
  * GdsReader checks them but not kept. Memory is about 4 bytes per coordinate plus 8 bytes per
- * shape (24 for paths) and 56 per reference, in chunks of up to 16 MB shared by consecutive cells
+ * shape (24 for paths; 24 in all for a boundary that is an axis-parallel rectangle, see
+ * {@link StreamCell#RECTANGLE}) and 56 per reference, in chunks of up to 16 MB shared by consecutive cells
  * (each part's last chunk cut to the size it uses when much of it is empty). A file of one huge
  * structure is read by one thread: parts start only at structures.
  */
@@ -992,6 +993,9 @@ public final class GdsStreamReader {
                     data[at + 5] = endExtn;
                 }
                 dataLength = at + header + xyValues;
+                if (k == StreamCell.BOUNDARY && points == 5) {
+                    dataLength = StreamCell.packRectangle(data, at);
+                }
                 shapeCount++;
             }
             case 0x0C -> {
@@ -1146,6 +1150,19 @@ public final class GdsStreamReader {
                 long xy2 = b.getLong(from + 16);
                 long xy3 = b.getLong(from + 24);
                 long xy4 = b.getLong(from + 32);
+                int turn = kind == StreamCell.BOUNDARY ? StreamCell.rectangleTurn(xy0, xy1, xy2, xy3, xy4) : -1;
+                if (turn >= 0) {
+                    d[length] = StreamCell.RECTANGLE << 28 | turn | 5;
+                    d[to] = (int) (xy0 >> 32);
+                    d[to + 1] = (int) xy0;
+                    d[to + 2] = (int) (xy2 >> 32);
+                    d[to + 3] = (int) xy2;
+                    length = to + 4;
+                    shapes++;
+                    lastEndel = endel;
+                    p = endel + 4;
+                    continue;
+                }
                 d[to] = (int) (xy0 >> 32);
                 d[to + 1] = (int) xy0;
                 d[to + 2] = (int) (xy1 >> 32);

@@ -172,7 +172,7 @@ public final class StreamFlattener {
             } else {
                 n = Saturating.add(n, points);
             }
-            i += StreamCell.headerSize(kind) + 2 * points;
+            i += StreamCell.recordSize(header);
         }
         for (; ri < r.length; ri += StreamCell.REF_STRIDE) {
             long child = Saturating.add(cost(layout, r[ri], roundSegments, memo), 1);
@@ -260,14 +260,14 @@ public final class StreamFlattener {
                     }
                 }
             } else {
-                long[] v = ring(d, xy, points);
+                long[] v = kind == StreamCell.RECTANGLE ? ring(StreamCell.points(d, i), 0, points) : ring(d, xy, points);
                 if (v == null) {
                     skippedHere++;
                 } else {
                     shapes.add(new LocalShape(key, v, null, 0, 0, 0));
                 }
             }
-            i = xy + 2 * points;
+            i += StreamCell.recordSize(header);
         }
         localShapes.set(cellIndex, shapes);
         skipped += skippedHere;
