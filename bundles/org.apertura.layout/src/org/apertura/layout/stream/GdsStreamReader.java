@@ -12,6 +12,7 @@ import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.nio.file.StandardOpenOption;
+import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
@@ -34,7 +35,8 @@ import org.apertura.layout.gds.Real8;
  * Reads a GDSII stream (Calma, "GDS II Stream Format Manual", Release 6.0, February 1987) straight
  * from a byte buffer into a {@link StreamLayout}, without building the EMF model: no object per
  * record or element, coordinates copied from the buffer into one growing {@code int} array per cell.
- * Files are memory-mapped in windows of up to 1 GiB, so any size works.
+ * Files are memory-mapped in windows of up to 1 GiB, so any size works (a file that fits one window
+ * is mapped once, and its parts share the mapping).
  * <p>
  * Structures are parsed by several threads at once ({@link StreamReadOptions#threads()}): the input
  * is cut into parts of about equal size, each starting at a structure (an ENDSTR record followed by
@@ -51,9 +53,10 @@ import org.apertura.layout.gds.Real8;
  * record counts and warnings are the same. Text elements, properties and dates are checked as
  * GdsReader checks them but not kept. Memory is about 4 bytes per coordinate plus 8 bytes per
  * shape (24 for paths; 24 in all for a boundary that is an axis-parallel rectangle, see
- * {@link StreamCell#RECTANGLE}) and 56 per reference, in chunks of up to 16 MB shared by consecutive cells
- * (each part's last chunk cut to the size it uses when much of it is empty). A file of one huge
- * structure is read by one thread: parts start only at structures.
+ * {@link StreamCell#RECTANGLE}) and 56 per reference, in chunks of up to 16 MB shared by consecutive
+ * cells (each part's last chunk cut to the size it uses when much of it is empty; a part of a few MB
+ * is gathered in a reused staging array and copied out to arrays of the exact size). A file of one
+ * huge structure is read by one thread: parts start only at structures.
  */
 public final class GdsStreamReader {
 
@@ -119,6 +122,12 @@ public final class GdsStreamReader {
     // near a part's end: 1 MB chunks, small enough for G1 to pack them densely (a large array left
     // partly empty, or cut to size, would leave the rest of its last heap region unused)
     private static final int SMALL_CHUNK = (1 << 18) - 16;
+    // a part of at most this many bytes writes its shapes into a staging array kept from earlier
+    // reads and copies them out to arrays of the exact size: a fresh chunk would be zeroed first and
+    // then cut to size, which for a file of a few MB costs as much as reading it
+    private static final long STAGED_PART_BYTES = 4L << 20;
+    private static final int STAGING = (1 << 18) - 16;
+    private final boolean staged;
     private int[] data;
     private int dataLength;
     private int chunkFirstCell;
@@ -141,6 +150,7 @@ public final class GdsStreamReader {
         long start = partStarts[part];
         this.partEnd = part + 1 < partStarts.length ? partStarts[part + 1] : fileSize;
         this.partBytes = partEnd - start;
+        this.staged = partBytes <= STAGED_PART_BYTES;
         if (whole != null) {
             this.buf = whole.duplicate().order(ByteOrder.BIG_ENDIAN);
             this.limit = buf.capacity();
@@ -179,7 +189,12 @@ public final class GdsStreamReader {
     /** Reads a file with the given window size and threads; the path as given appears in error messages. */
     public static StreamLayout read(Path path, StreamReadOptions options) throws IOException {
         try (FileChannel ch = FileChannel.open(path, StandardOpenOption.READ)) {
-            return readInput(path.toString(), ch, null, ch.size(), options);
+            long size = ch.size();
+            if (size <= options.windowBytes()) { // one mapping, shared by the parts
+                ByteBuffer whole = ch.map(FileChannel.MapMode.READ_ONLY, 0, size).order(ByteOrder.BIG_ENDIAN);
+                return readInput(path.toString(), null, whole, size, options);
+            }
+            return readInput(path.toString(), ch, null, size, options);
         }
     }
 
@@ -351,7 +366,8 @@ public final class GdsStreamReader {
     /** Parses this part on the current thread, keeping any failure for the join. */
     private void parsePart() {
         try {
-            data = new int[firstChunk()]; // here, so that the parts' threads allocate in parallel
+            // here, so that the parts' threads allocate in parallel
+            data = staged ? Staging.take() : new int[firstChunk()];
             if (channel != null) {
                 map(partStarts[nextPart - 1]);
             }
@@ -359,9 +375,45 @@ public final class GdsStreamReader {
                 readHeader();
             }
             readLibrary();
-            trimLastChunk();
+            if (staged) {
+                copyOutStaged(dataLength);
+            } else {
+                trimLastChunk();
+            }
         } catch (Throwable e) { // Cancelled included
             failure = e;
+        } finally {
+            if (staged) {
+                Staging.give(data);
+                data = null;
+            }
+        }
+    }
+
+    /** Staging arrays (1 MB each) kept between reads, at most one per processor and 8 in all. */
+    private static final class Staging {
+        private static final int KEEP = Math.min(8, Runtime.getRuntime().availableProcessors());
+        private static final ArrayDeque<int[]> FREE = new ArrayDeque<>();
+
+        static int[] take() {
+            synchronized (FREE) {
+                int[] a = FREE.poll();
+                if (a != null) {
+                    return a;
+                }
+            }
+            return new int[STAGING];
+        }
+
+        static void give(int[] a) {
+            if (a == null || a.length != STAGING) {
+                return;
+            }
+            synchronized (FREE) {
+                if (FREE.size() < KEEP) {
+                    FREE.push(a);
+                }
+            }
         }
     }
 
@@ -1075,6 +1127,45 @@ public final class GdsStreamReader {
         while (p + 20 <= lim) {
             // element record and LAYER header; LAYER value, DATATYPE header and value
             long head = b.getLong(p);
+            if (head == 0x0004_0800_0006_0D02L && p + 64 <= lim) {
+                // the usual rectangle: a boundary of five points in 64 bytes, read as eight longs
+                long l1 = b.getLong(p + 8);
+                long l2 = b.getLong(p + 16);
+                long l7 = b.getLong(p + 56);
+                if ((l1 & 0x0000_FFFF_FFFF_0000L) == 0x0000_0006_0E02_0000L && (l2 >>> 32) == 0x002C_1003L
+                        && (int) l7 == 0x0004_1100) {
+                    long l3 = b.getLong(p + 24);
+                    long l4 = b.getLong(p + 32);
+                    long l5 = b.getLong(p + 40);
+                    long l6 = b.getLong(p + 48);
+                    // points as x << 32 | y
+                    long p0 = l2 << 32 | l3 >>> 32;
+                    long p1 = l3 << 32 | l4 >>> 32;
+                    long p2 = l4 << 32 | l5 >>> 32;
+                    long p3 = l5 << 32 | l6 >>> 32;
+                    long p4 = l6 << 32 | l7 >>> 32;
+                    int turn = StreamCell.rectangleTurn(p0, p1, p2, p3, p4);
+                    if (turn >= 0) {
+                        if (length + 6 > d.length) {
+                            dataLength = length;
+                            grow(6);
+                            d = data;
+                            length = dataLength;
+                        }
+                        d[length] = StreamCell.RECTANGLE << 28 | turn | 5;
+                        d[length + 1] = (int) (l1 >> 48) << 16 | (int) (l1 & 0xFFFF);
+                        d[length + 2] = (int) l2;
+                        d[length + 3] = (int) (l3 >> 32);
+                        d[length + 4] = (int) l4;
+                        d[length + 5] = (int) (l5 >> 32);
+                        length += 6;
+                        shapes++;
+                        lastEndel = p + 60;
+                        p += 64;
+                        continue;
+                    }
+                }
+            }
             int header;
             int kind;
             if (head == 0x0004_0800_0006_0D02L) {
@@ -1144,25 +1235,12 @@ public final class GdsStreamReader {
             }
             int to = length + header;
             int from = q + 4;
-            if (values == 10) { // five points: the closed rectangle most boundaries are
+            if (values == 10) { // five points: a path, or a boundary that is not a rectangle
                 long xy0 = b.getLong(from);
                 long xy1 = b.getLong(from + 8);
                 long xy2 = b.getLong(from + 16);
                 long xy3 = b.getLong(from + 24);
                 long xy4 = b.getLong(from + 32);
-                int turn = kind == StreamCell.BOUNDARY ? StreamCell.rectangleTurn(xy0, xy1, xy2, xy3, xy4) : -1;
-                if (turn >= 0) {
-                    d[length] = StreamCell.RECTANGLE << 28 | turn | 5;
-                    d[to] = (int) (xy0 >> 32);
-                    d[to + 1] = (int) xy0;
-                    d[to + 2] = (int) (xy2 >> 32);
-                    d[to + 3] = (int) xy2;
-                    length = to + 4;
-                    shapes++;
-                    lastEndel = endel;
-                    p = endel + 4;
-                    continue;
-                }
                 d[to] = (int) (xy0 >> 32);
                 d[to + 1] = (int) xy0;
                 d[to + 2] = (int) (xy1 >> 32);
@@ -1252,6 +1330,10 @@ public final class GdsStreamReader {
      * in the chunk as in the file.
      */
     private void grow(int more) {
+        if (staged) {
+            growStaged(more);
+            return;
+        }
         int cellSoFar = dataLength - cellStart;
         long left = Math.max(0, partEnd - (base + payloadStart));
         int size = (int) Math.max(chunkFor(left + (1 << 18)), 2L * (cellSoFar + more));
@@ -1260,6 +1342,42 @@ public final class GdsStreamReader {
         data = chunk;
         cellStart = 0;
         dataLength = cellSoFar;
+        chunkFirstCell = cells.size();
+    }
+
+    /**
+     * Staged: copies the finished cells out, moves the current cell's shapes so far to the front of
+     * the staging array, and takes a larger array (not kept later) if they still do not fit.
+     */
+    private void growStaged(int more) {
+        copyOutStaged(cellStart);
+        int cellSoFar = dataLength - cellStart;
+        if (cellSoFar + more <= data.length) {
+            System.arraycopy(data, cellStart, data, 0, cellSoFar);
+        } else {
+            int[] larger = new int[(int) Math.min(Integer.MAX_VALUE - 16, 2L * (cellSoFar + more))];
+            System.arraycopy(data, cellStart, larger, 0, cellSoFar);
+            Staging.give(data);
+            data = larger;
+        }
+        cellStart = 0;
+        dataLength = cellSoFar;
+    }
+
+    /**
+     * Staged: gives the cells finished since the last copy, whose shapes end at {@code end}, an
+     * array of exactly their shapes.
+     */
+    private void copyOutStaged(int end) {
+        if (chunkFirstCell == cells.size()) {
+            return;
+        }
+        int[] exact = Arrays.copyOf(data, end);
+        for (int i = chunkFirstCell; i < cells.size(); i++) {
+            StreamCell c = cells.get(i);
+            cells.set(i, new StreamCell(c.name(), c.offset(), exact, c.shapeStart(), c.shapeEnd(), c.shapeCount(),
+                    c.referenceData(), c.referenceTransforms(), c.textCount()));
+        }
         chunkFirstCell = cells.size();
     }
 

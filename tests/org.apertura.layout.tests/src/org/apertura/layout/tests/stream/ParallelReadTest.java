@@ -23,6 +23,7 @@ import java.util.stream.Stream;
 
 import org.apertura.layout.flatten.FlattenOptions;
 import org.apertura.layout.gds.GdsFormatException;
+import org.apertura.layout.gds.GdsReader;
 import org.apertura.layout.stream.GdsStreamReader;
 import org.apertura.layout.stream.StreamCell;
 import org.apertura.layout.stream.StreamLayout;
@@ -196,6 +197,56 @@ class ParallelReadTest {
             }
         }
         assertTrue(rejected > 0 && rejected < 150, "rejected " + rejected + " of 150");
+    }
+
+    @Test
+    void largeAndSmallPartsStoreTheSameShapes(@TempDir Path dir) throws IOException {
+        // read as one part of about 9 MB, shapes go to chunks; cut in parts below 4 MiB (the reader's
+        // bound for staging), they are gathered in a staging array and copied out, and the first
+        // structure, 50,000 rectangles (more than a staging array holds), makes the staging array
+        // grow: the layouts must be identical
+        Random random = new Random(5);
+        GdsBytes g = new GdsBytes().libraryStart("BIG").structure("HUGE");
+        for (int e = 0; e < 50_000; e++) {
+            int x = random.nextInt(1_000_000);
+            g.boundary(4, 1, x, 0, x, 7, x + 3, 7, x + 3, 0, x, 0);
+        }
+        g.endStructure();
+        for (int s = 0; s < 90; s++) {
+            g.structure("C" + pad(s));
+            for (int e = 0; e < 1000; e++) {
+                int x = random.nextInt(1_000_000);
+                int y = random.nextInt(1_000_000);
+                int w = 1 + random.nextInt(100);
+                if (e % 10 == 9) {
+                    g.boundary(2, 0, x, y, x + w, y, x + w, y + w, x + 1, y + w, x, y); // not a rectangle
+                } else if (e % 10 == 8) {
+                    g.empty(0x09).int16(0x0D, 2, 3).int16(0x0E, 2, 0).int32(0x0F, 4)
+                            .int32(0x10, x, y, x + w, y, x + w, y + w).empty(0x11);
+                } else {
+                    g.boundary(1, 0, x, y, x + w, y, x + w, y + w, x, y + w, x, y);
+                }
+            }
+            g.endStructure();
+        }
+        byte[] bytes = g.endLibrary().bytes();
+        assertTrue(bytes.length > 8 << 20, bytes.length + " bytes");
+        long[] starts = GdsStreamReader.partStarts(ByteBuffer.wrap(bytes), StreamEquivalence.forcedParts(8));
+        for (int i = 0; i < starts.length; i++) {
+            long end = i + 1 < starts.length ? starts[i + 1] : bytes.length;
+            assertTrue(end - starts[i] < 4 << 20, "part " + i + " of " + Arrays.toString(starts));
+        }
+        assertTrue(starts[1] > 50_000 * 64, "the first part holds the whole first structure");
+        StreamLayout oneLargePart = GdsStreamReader.read(bytes, "big.gds", StreamEquivalence.sequential());
+        StreamLayout smallParts = GdsStreamReader.read(bytes, "big.gds", StreamEquivalence.forcedParts(8));
+        StreamEquivalence.assertIdentical(oneLargePart, smallParts, "8 parts");
+        StreamCell huge = oneLargePart.cells().get(0);
+        assertEquals(50_000, huge.shapeCount());
+        assertEquals(50_000 * 6, huge.shapeEnd() - huge.shapeStart(), "rectangles take six values each");
+        Path file = dir.resolve("big.gds");
+        Files.write(file, bytes);
+        StreamEquivalence.assertIdentical(oneLargePart, GdsStreamReader.read(file), "mapped, default options");
+        StreamEquivalence.assertSameLayout(GdsReader.read(file), smallParts, BOUNDED);
     }
 
     @Test
