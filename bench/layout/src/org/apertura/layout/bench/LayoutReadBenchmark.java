@@ -41,7 +41,8 @@ import org.apertura.layout.stream.StreamReadOptions;
  * parsed by one thread per available processor; and with one thread) and of the EMF reader
  * {@link GdsReader}, each beside a plain sequential read of the same file (an InputStream read into
  * a 256 KiB buffer) measured in the same run, rounds interleaved so machine load hits all alike;
- * and heap used per element by each result. Not a test: it prints figures. Arguments: the ASAP7
+ * for context, a bare record walk and a fresh mapping with every page touched (the floor of any
+ * mapped read); and heap used per element by each result. Not a test: it prints figures. Arguments: the ASAP7
  * library file, a scratch folder for the generated file (deleted at the end), and the size in MB of
  * the generated file (at least 200).
  */
@@ -117,6 +118,7 @@ public final class LayoutReadBenchmark {
         for (int i = 0; i < warmup; i++) {
             sink += plainRead(file);
             sink += recordWalk(file);
+            sink += mapAndTouch(file);
             sink += GdsStreamReader.read(file).cells().size();
             sink += GdsStreamReader.read(file, ONE_THREAD).cells().size();
             sink += GdsReader.read(file).library().getCells().size();
@@ -124,6 +126,7 @@ public final class LayoutReadBenchmark {
         double[] plain = new double[rounds];
         double[] plainCpu = new double[rounds];
         double[] walk = new double[rounds];
+        double[] touch = new double[rounds];
         double[] stream = new double[rounds];
         long streamCpuNanos = 0;
         double[] streamRatio = new double[rounds];
@@ -146,6 +149,10 @@ public final class LayoutReadBenchmark {
             t = System.nanoTime();
             sink += recordWalk(file);
             walk[i] = mb / ((System.nanoTime() - t) / 1e9);
+
+            t = System.nanoTime();
+            sink += mapAndTouch(file);
+            touch[i] = mb / ((System.nanoTime() - t) / 1e9);
 
             long gc = gcMillis();
             c = os.getProcessCpuTime();
@@ -183,6 +190,9 @@ public final class LayoutReadBenchmark {
         System.out.printf("record walk, 1 thread : median %6.0f MB/s wall clock; ratio to plain %.2f (mapped file, record"
                 + " headers followed one by one and every XY value read; no checks, nothing kept)%n", median(walk),
                 median(walk) / p);
+        System.out.printf("mapping, pages touched: median %6.0f MB/s wall clock; ratio to plain %.2f (a fresh mapping of the"
+                + " file, one byte read per 4 KiB page: the page faults every mapped read pays)%n", median(touch),
+                median(touch) / p);
         System.out.printf("GdsStreamReader       : median %6.0f MB/s (best %.0f) wall clock; %.0f MB/s per CPU second"
                 + " of the whole process (all threads, over all rounds); GC %.0f ms per read (%d rounds)%n",
                 median(stream), max(stream), mb * rounds / (streamCpuNanos / 1e9), (double) streamGc / rounds, rounds);
@@ -261,6 +271,18 @@ public final class LayoutReadBenchmark {
                     }
                 }
                 pos += length;
+            }
+            return sum;
+        }
+    }
+
+    /** Maps the file afresh and reads one byte of every 4 KiB page, printed for context. */
+    private static long mapAndTouch(Path file) throws IOException {
+        try (FileChannel ch = FileChannel.open(file, StandardOpenOption.READ)) {
+            ByteBuffer b = ch.map(FileChannel.MapMode.READ_ONLY, 0, ch.size());
+            long sum = 0;
+            for (int i = 0; i < b.capacity(); i += 4096) {
+                sum += b.get(i);
             }
             return sum;
         }

@@ -20,11 +20,13 @@ package org.apertura.layout.stream;
 public record StreamReadOptions(long windowBytes, int threads, long minBytesPerThread) {
 
     /**
-     * A 1 GiB window, one thread per available processor, parts of at least 512 KiB: starting and
-     * joining a thread costs some 50 microseconds, about what parsing 256 KiB takes (measured on the
-     * 2 MB ASAP7 library, which two threads read about 1.2 times as fast as one).
+     * A 1 GiB window, one thread per available processor, parts of at least 8 MiB. A smaller input
+     * reads in about a millisecond, and on the 2-core machine bench/layout runs on, two threads read
+     * the 2 MB ASAP7 library no faster than one when the read follows an idle moment, as a user's
+     * read does (waking the idle thread and faulting in the mapped pages from two threads cost what
+     * the second thread saves); read back to back, two threads were about 1.2 times as fast.
      */
-    public static final StreamReadOptions DEFAULTS = new StreamReadOptions(GdsStreamReader.DEFAULT_WINDOW, 0, 1 << 19);
+    public static final StreamReadOptions DEFAULTS = new StreamReadOptions(GdsStreamReader.DEFAULT_WINDOW, 0, 1 << 23);
 
     /** @throws IllegalArgumentException for a window out of range, negative threads or part size */
     public StreamReadOptions {
