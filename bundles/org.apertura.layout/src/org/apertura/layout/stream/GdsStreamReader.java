@@ -1372,13 +1372,17 @@ public final class GdsStreamReader {
         if (chunkFirstCell == cells.size()) {
             return;
         }
-        int[] exact = Arrays.copyOf(data, end);
+        moveChunkCellsTo(Arrays.copyOf(data, end));
+        chunkFirstCell = cells.size();
+    }
+
+    /** Points the cells made since the chunk began at {@code array}, which holds their shapes where the chunk did. */
+    private void moveChunkCellsTo(int[] array) {
         for (int i = chunkFirstCell; i < cells.size(); i++) {
             StreamCell c = cells.get(i);
-            cells.set(i, new StreamCell(c.name(), c.offset(), exact, c.shapeStart(), c.shapeEnd(), c.shapeCount(),
+            cells.set(i, new StreamCell(c.name(), c.offset(), array, c.shapeStart(), c.shapeEnd(), c.shapeCount(),
                     c.referenceData(), c.referenceTransforms(), c.textCount()));
         }
-        chunkFirstCell = cells.size();
     }
 
     /**
@@ -1391,11 +1395,7 @@ public final class GdsStreamReader {
             return;
         }
         int[] exact = Arrays.copyOf(data, dataLength);
-        for (int i = chunkFirstCell; i < cells.size(); i++) {
-            StreamCell c = cells.get(i);
-            cells.set(i, new StreamCell(c.name(), c.offset(), exact, c.shapeStart(), c.shapeEnd(), c.shapeCount(),
-                    c.referenceData(), c.referenceTransforms(), c.textCount()));
-        }
+        moveChunkCellsTo(exact);
         data = exact;
     }
 

@@ -72,6 +72,18 @@ class RectangleRecordTest {
         return points;
     }
 
+    /** Each ring, plain or with ELFLAGS, gets a record of the given kind that gives back its points. */
+    private static void assertKeptAs(int kind, List<int[]> rings) throws IOException {
+        for (boolean elflags : new boolean[] {false, true}) {
+            List<Integer> kinds = new ArrayList<>();
+            List<int[]> points = records(read(rings, elflags), kinds);
+            for (int i = 0; i < rings.size(); i++) {
+                assertEquals(kind, kinds.get(i), "ring " + Arrays.toString(rings.get(i)));
+                assertArrayEquals(rings.get(i), points.get(i), "ring " + i + (elflags ? " with ELFLAGS" : ""));
+            }
+        }
+    }
+
     /** Independent statement of the rule: closed, and its four edges alternate horizontal and vertical. */
     private static boolean isAxisParallelRectangle(int[] r) {
         if (r[8] != r[0] || r[9] != r[1]) {
@@ -91,15 +103,12 @@ class RectangleRecordTest {
     @Test
     void everyCornerAndTurnIsKeptAsTwoCornersAndGivenBackExactly() throws IOException {
         List<int[]> rings = rectangleRings();
+        assertKeptAs(StreamCell.RECTANGLE, rings);
         for (boolean elflags : new boolean[] {false, true}) {
             StreamCell c = read(rings, elflags);
             assertEquals(8, c.shapeCount());
             assertEquals(8 * 6, c.shapeEnd() - c.shapeStart(), "six values per rectangle");
-            List<Integer> kinds = new ArrayList<>();
-            List<int[]> points = records(c, kinds);
             for (int i = 0; i < rings.size(); i++) {
-                assertEquals(StreamCell.RECTANGLE, kinds.get(i), "ring " + i);
-                assertArrayEquals(rings.get(i), points.get(i), "ring " + i + (elflags ? " with ELFLAGS" : ""));
                 assertEquals(5, StreamCell.pointCount(c.shapeData()[c.shapeStart() + 6 * i]));
             }
         }
@@ -119,14 +128,7 @@ class RectangleRecordTest {
                 new int[] {0, 0, 10, 0, 0, 0, 10, 0, 0, 0},            // back and forth on one line
                 new int[] {0, 0, 10, 0, 10, 5, 0, 0},                  // four points
                 new int[] {0, 0, 10, 0, 10, 5, 5, 5, 5, 8, 0, 8, 0, 0}); // seven points
-        for (boolean elflags : new boolean[] {false, true}) {
-            List<Integer> kinds = new ArrayList<>();
-            List<int[]> points = records(read(rings, elflags), kinds);
-            for (int i = 0; i < rings.size(); i++) {
-                assertEquals(StreamCell.BOUNDARY, kinds.get(i), "ring " + i);
-                assertArrayEquals(rings.get(i), points.get(i), "ring " + i);
-            }
-        }
+        assertKeptAs(StreamCell.BOUNDARY, rings);
     }
 
     @Test
@@ -139,14 +141,7 @@ class RectangleRecordTest {
                 new int[] {0, 0, 0, 7, 0, 7, 0, 0, 0, 0},              // zero width
                 new int[] {min, min, max, min, max, max, min, max, min, min},
                 new int[] {max, -1, max, min, -1, min, -1, -1, max, -1});
-        for (boolean elflags : new boolean[] {false, true}) {
-            List<Integer> kinds = new ArrayList<>();
-            List<int[]> points = records(read(rings, elflags), kinds);
-            for (int i = 0; i < rings.size(); i++) {
-                assertEquals(StreamCell.RECTANGLE, kinds.get(i), "ring " + i);
-                assertArrayEquals(rings.get(i), points.get(i), "ring " + i);
-            }
-        }
+        assertKeptAs(StreamCell.RECTANGLE, rings);
     }
 
     @Test
