@@ -66,6 +66,7 @@ public final class GdsReader {
     private final Map<String, Integer> skipped = new TreeMap<>();
     private final List<String> warnings = new ArrayList<>();
     private int roundedPitches;
+    private final ElementRecords records = new ElementRecords();
 
     private GdsReader(GdsRecordInput in) {
         this.in = in;
@@ -184,7 +185,7 @@ public final class GdsReader {
                 if (cell.getName() == null) {
                     throw in.error(GdsRecordType.nameOf(type) + " element in a structure without STRNAME");
                 }
-                Element e = readElement(cell, type);
+                Element e = readElement(cell);
                 if (e != null) {
                     elements.add(e);
                 }
@@ -199,286 +200,163 @@ public final class GdsReader {
         return cell;
     }
 
-    /** Reads one element; returns null for element kinds the model does not hold (NODE, TEXTNODE). */
-    private Element readElement(Cell cell, int kind) throws IOException {
-        long start = in.offset();
-        String kindName = GdsRecordType.nameOf(kind);
-        check(GdsRecordType.ofCode(kind), 0);
-        boolean modelled = kind != 0x15 && kind != 0x14;
-        if (!modelled) {
-            count(kindName + " element");
+    /** An element's records through {@link #in}; XY, SNAME, STRING and properties kept for the model. */
+    private final class ElementRecords extends GdsElementRecords {
+        int[] xy;
+        String sname;
+        String string;
+        List<Property> properties;
+
+        @Override
+        protected boolean next() throws IOException {
+            return in.next();
         }
-        int layer = Integer.MIN_VALUE;
-        int datatype = 0;
-        int pathType = 0;
-        int width = 0;
-        int bgnExtn = 0;
-        int endExtn = 0;
-        int[] xy = null;
-        String sname = null;
-        long snameOffset = -1;
-        int columns = 0;
-        int rows = 0;
-        boolean colrow = false;
-        int strans = 0;
-        double mag = 1.0;
-        double angle = 0.0;
-        int presentation = 0;
-        String string = null;
-        List<Property> properties = null;
-        int pendingAttr = Integer.MIN_VALUE;
-        while (true) {
-            if (!in.next()) {
-                throw in.error("file ends inside " + kindName + " element started at byte " + start);
-            }
-            int type = in.type();
-            if (type == 0x11) { // ENDEL
-                break;
-            }
-            if (!modelled) {
-                if (GdsRecordType.isElementStart(type) || type == 0x07 || type == 0x04 || type == 0x05) {
-                    throw in.error(GdsRecordType.nameOf(type) + " before ENDEL of the " + kindName
-                            + " element started at byte " + start);
-                }
-                continue;
-            }
-            switch (type) {
-                case 0x0D -> { // LAYER
-                    check(GdsRecordType.LAYER, 2);
-                    layer = in.int16(0);
-                }
-                case 0x0E, 0x16, 0x2E -> { // DATATYPE, TEXTTYPE, BOXTYPE
-                    GdsRecordType t = GdsRecordType.ofCode(type);
-                    if (t != GdsRecordType.typeRecordOf(kind)) {
-                        misplaced(t, kindName);
-                    } else {
-                        check(t, 2);
-                        datatype = in.int16(0);
-                    }
-                }
-                case 0x10 -> { // XY
-                    check(GdsRecordType.XY, 0);
-                    if (in.length() % 8 != 0) {
-                        throw in.error("XY record has " + in.length() + " data bytes, not a multiple of 8 (record length "
-                                + (in.length() + 4) + ")");
-                    }
-                    xy = in.int32Array();
-                }
-                case 0x21 -> { // PATHTYPE
-                    if (kind != 0x09 && kind != 0x0C) {
-                        misplaced(GdsRecordType.PATHTYPE, kindName);
-                    } else {
-                        check(GdsRecordType.PATHTYPE, 2);
-                        pathType = in.int16(0);
-                        if (PathType.get(pathType) == null) {
-                            throw in.error("PATHTYPE " + pathType + " is undefined (0, 1, 2 or 4)");
-                        }
-                    }
-                }
-                case 0x0F -> { // WIDTH
-                    if (kind != 0x09 && kind != 0x0C) {
-                        misplaced(GdsRecordType.WIDTH, kindName);
-                    } else {
-                        check(GdsRecordType.WIDTH, 4);
-                        width = in.int32(0);
-                    }
-                }
-                case 0x30, 0x31 -> { // BGNEXTN, ENDEXTN
-                    GdsRecordType t = GdsRecordType.ofCode(type);
-                    if (kind != 0x09) {
-                        misplaced(t, kindName);
-                    } else {
-                        check(t, 4);
-                        if (type == 0x30) {
-                            bgnExtn = in.int32(0);
-                        } else {
-                            endExtn = in.int32(0);
-                        }
-                    }
-                }
-                case 0x12 -> { // SNAME
-                    if (kind != 0x0A && kind != 0x0B) {
-                        misplaced(GdsRecordType.SNAME, kindName);
-                    } else {
-                        check(GdsRecordType.SNAME, 1);
-                        sname = in.string();
-                        snameOffset = in.offset();
-                    }
-                }
-                case 0x13 -> { // COLROW
-                    if (kind != 0x0B) {
-                        misplaced(GdsRecordType.COLROW, kindName);
-                    } else {
-                        check(GdsRecordType.COLROW, 4);
-                        columns = in.int16(0);
-                        rows = in.int16(1);
-                        colrow = true;
-                        if (columns < 1 || rows < 1) {
-                            throw in.error("AREF with " + columns + " columns and " + rows + " rows (each must be 1 to 32767)");
-                        }
-                    }
-                }
-                case 0x1A -> { // STRANS
-                    if (kind != 0x0A && kind != 0x0B && kind != 0x0C) {
-                        misplaced(GdsRecordType.STRANS, kindName);
-                    } else {
-                        check(GdsRecordType.STRANS, 2);
-                        strans = in.int16(0) & 0xFFFF;
-                    }
-                }
-                case 0x1B, 0x1C -> { // MAG, ANGLE
-                    GdsRecordType t = GdsRecordType.ofCode(type);
-                    if (kind != 0x0A && kind != 0x0B && kind != 0x0C) {
-                        misplaced(t, kindName);
-                    } else {
-                        check(t, 8);
-                        double v = in.real8(0);
-                        if (type == 0x1B) {
-                            if (!(v > 0)) {
-                                throw in.error("MAG " + v + " is not positive");
-                            }
-                            mag = v;
-                        } else {
-                            angle = v;
-                        }
-                    }
-                }
-                case 0x17 -> { // PRESENTATION
-                    if (kind != 0x0C) {
-                        misplaced(GdsRecordType.PRESENTATION, kindName);
-                    } else {
-                        check(GdsRecordType.PRESENTATION, 2);
-                        presentation = in.int16(0) & 0xFFFF;
-                        if (((presentation >> 2) & 3) == 3 || (presentation & 3) == 3) {
-                            throw in.error("PRESENTATION justification value 3 is undefined");
-                        }
-                    }
-                }
-                case 0x19 -> { // STRING
-                    if (kind != 0x0C) {
-                        misplaced(GdsRecordType.STRING, kindName);
-                    } else {
-                        check(GdsRecordType.STRING, 0);
-                        string = in.string();
-                    }
-                }
-                case 0x2B -> { // PROPATTR
-                    check(GdsRecordType.PROPATTR, 2);
-                    pendingAttr = in.int16(0);
-                }
-                case 0x2C -> { // PROPVALUE
-                    check(GdsRecordType.PROPVALUE, 0);
-                    if (pendingAttr == Integer.MIN_VALUE) {
-                        throw in.error("PROPVALUE without a preceding PROPATTR");
-                    }
-                    Property p = factory.createProperty();
-                    p.setAttribute(pendingAttr);
-                    p.setValue(in.string());
-                    if (properties == null) {
-                        properties = new ArrayList<>(2);
-                    }
-                    properties.add(p);
-                    pendingAttr = Integer.MIN_VALUE;
-                }
-                default -> {
-                    if (GdsRecordType.isElementStart(type) || type == 0x07 || type == 0x04 || type == 0x05 || type == 0x06) {
-                        throw in.error(GdsRecordType.nameOf(type) + " before ENDEL of the " + kindName
-                                + " element started at byte " + start);
-                    }
-                    skipOrFail("inside a " + kindName + " element");
-                }
-            }
+
+        @Override
+        protected int recordType() {
+            return in.type();
         }
-        if (!modelled) {
+
+        @Override
+        protected int recordDataType() {
+            return in.dataType();
+        }
+
+        @Override
+        protected int payloadLength() {
+            return in.length();
+        }
+
+        @Override
+        protected long recordOffset() {
+            return in.offset();
+        }
+
+        @Override
+        protected int int16(int index) {
+            return in.int16(index);
+        }
+
+        @Override
+        protected int int32(int index) {
+            return in.int32(index);
+        }
+
+        @Override
+        protected double real8(int index) {
+            return in.real8(index);
+        }
+
+        @Override
+        protected String file() {
+            return in.file();
+        }
+
+        @Override
+        protected void count(String what) {
+            GdsReader.this.count(what);
+        }
+
+        @Override
+        protected void xy(int values) {
+            xy = in.int32Array();
+        }
+
+        @Override
+        protected void sname() {
+            sname = in.string();
+        }
+
+        @Override
+        protected void string() {
+            string = in.string();
+        }
+
+        @Override
+        protected void propertyValue(int attributeNumber) {
+            Property p = factory.createProperty();
+            p.setAttribute(attributeNumber);
+            p.setValue(in.string());
+            if (properties == null) {
+                properties = new ArrayList<>(2);
+            }
+            properties.add(p);
+        }
+    }
+
+    /** Reads the element at the current record; returns null for kinds the model does not hold (NODE, TEXTNODE). */
+    private Element readElement(Cell cell) throws IOException {
+        ElementRecords r = records;
+        r.xy = null;
+        r.sname = null;
+        r.string = null;
+        r.properties = null;
+        if (!r.read()) {
             return null;
         }
-        if (pendingAttr != Integer.MIN_VALUE) {
-            throw new GdsFormatException(in.file(), start, kindName + " element has a PROPATTR without PROPVALUE");
-        }
-        if (xy == null) {
-            throw new GdsFormatException(in.file(), start, kindName + " element without XY");
-        }
-        int points = xy.length / 2;
+        int[] xy = r.xy;
         Element element;
-        switch (kind) {
+        switch (r.kind()) {
             case 0x08 -> {
-                requireLayer(layer, start, kindName);
-                requirePoints(points >= 1, start, kindName, points, "at least 1");
                 Boundary b = factory.createBoundary();
-                b.setLayer(layer);
-                b.setDatatype(datatype);
+                b.setLayer(r.layer());
+                b.setDatatype(r.datatype());
                 b.setPoints(PointList.wrap(xy));
                 element = b;
             }
             case 0x09 -> {
-                requireLayer(layer, start, kindName);
-                requirePoints(points >= 1, start, kindName, points, "at least 1");
                 org.apertura.layout.model.Path p = factory.createPath();
-                p.setLayer(layer);
-                p.setDatatype(datatype);
-                p.setPathType(PathType.get(pathType));
-                p.setWidth(width);
-                p.setBeginExtension(bgnExtn);
-                p.setEndExtension(endExtn);
+                p.setLayer(r.layer());
+                p.setDatatype(r.datatype());
+                p.setPathType(PathType.get(r.pathType()));
+                p.setWidth(r.width());
+                p.setBeginExtension(r.beginExtension());
+                p.setEndExtension(r.endExtension());
                 p.setPoints(PointList.wrap(xy));
                 element = p;
             }
             case 0x2D -> {
-                requireLayer(layer, start, kindName);
-                requirePoints(points == 5, start, kindName, points, "5");
                 Box b = factory.createBox();
-                b.setLayer(layer);
-                b.setBoxType(datatype);
+                b.setLayer(r.layer());
+                b.setBoxType(r.datatype());
                 b.setPoints(PointList.wrap(xy));
                 element = b;
             }
             case 0x0C -> {
-                requireLayer(layer, start, kindName);
-                requirePoints(points == 1, start, kindName, points, "1");
-                if (string == null) {
-                    throw new GdsFormatException(in.file(), start, "TEXT element without STRING");
-                }
                 Text t = factory.createText();
-                t.setLayer(layer);
-                t.setTextType(datatype);
-                t.setString(string);
-                t.setFont((presentation >> 4) & 3);
-                t.setVerticalJustification(VerticalJustification.get((presentation >> 2) & 3));
-                t.setHorizontalJustification(HorizontalJustification.get(presentation & 3));
-                t.setPathType(PathType.get(pathType));
-                t.setWidth(width);
-                place(t, xy, strans, mag, angle);
+                t.setLayer(r.layer());
+                t.setTextType(r.datatype());
+                t.setString(r.string);
+                t.setFont((r.presentation() >> 4) & 3);
+                t.setVerticalJustification(VerticalJustification.get((r.presentation() >> 2) & 3));
+                t.setHorizontalJustification(HorizontalJustification.get(r.presentation() & 3));
+                t.setPathType(PathType.get(r.pathType()));
+                t.setWidth(r.width());
+                place(t, xy, r.strans(), r.magnification(), r.angle());
                 element = t;
             }
             case 0x0A -> {
-                requireName(sname, start, kindName);
-                requirePoints(points == 1, start, kindName, points, "1");
-                CellReference r = factory.createCellReference();
-                place(r, xy, strans, mag, angle);
-                pending.add(new PendingReference(r, sname, snameOffset, cell));
-                element = r;
+                CellReference ref = factory.createCellReference();
+                place(ref, xy, r.strans(), r.magnification(), r.angle());
+                pending.add(new PendingReference(ref, r.sname, r.snameOffset(), cell));
+                element = ref;
             }
             case 0x0B -> {
-                requireName(sname, start, kindName);
-                if (!colrow) {
-                    throw new GdsFormatException(in.file(), start, "AREF element without COLROW");
-                }
-                requirePoints(points == 3, start, kindName, points, "3");
                 ArrayReference a = factory.createArrayReference();
-                place(a, xy, strans, mag, angle);
-                a.setColumns(columns);
-                a.setRows(rows);
-                a.setColumnPitchX(pitch((long) xy[2] - xy[0], columns));
-                a.setColumnPitchY(pitch((long) xy[3] - xy[1], columns));
-                a.setRowPitchX(pitch((long) xy[4] - xy[0], rows));
-                a.setRowPitchY(pitch((long) xy[5] - xy[1], rows));
-                pending.add(new PendingReference(a, sname, snameOffset, cell));
+                place(a, xy, r.strans(), r.magnification(), r.angle());
+                a.setColumns(r.columns());
+                a.setRows(r.rows());
+                a.setColumnPitchX(pitch((long) xy[2] - xy[0], r.columns()));
+                a.setColumnPitchY(pitch((long) xy[3] - xy[1], r.columns()));
+                a.setRowPitchX(pitch((long) xy[4] - xy[0], r.rows()));
+                a.setRowPitchY(pitch((long) xy[5] - xy[1], r.rows()));
+                pending.add(new PendingReference(a, r.sname, r.snameOffset(), cell));
                 element = a;
             }
-            default -> throw new IllegalStateException("element kind " + kindName);
+            default -> throw new IllegalStateException("element kind " + r.kind());
         }
-        if (properties != null) {
-            ((InternalEList<Property>) element.getProperties()).addAllUnique(properties);
+        if (r.properties != null) {
+            ((InternalEList<Property>) element.getProperties()).addAllUnique(r.properties);
         }
         return element;
     }
@@ -498,19 +376,6 @@ public final class GdsReader {
         p.setAbsoluteAngle((strans & 0x0002) != 0);
         p.setMagnification(mag);
         p.setAngle(angle);
-    }
-
-    private void requireLayer(int layer, long start, String kind) throws GdsFormatException {
-        GdsReadChecks.requireLayer(in.file(), layer, start, kind);
-    }
-
-    private void requireName(String sname, long start, String kind) throws GdsFormatException {
-        GdsReadChecks.requireName(in.file(), sname != null, start, kind);
-    }
-
-    private void requirePoints(boolean ok, long start, String kind, int points, String expected)
-            throws GdsFormatException {
-        GdsReadChecks.requirePoints(in.file(), ok, start, kind, points, expected);
     }
 
     /** Cells no reference points to, from the references collected while reading (no second pass). */
@@ -600,26 +465,11 @@ public final class GdsReader {
 
     /** Checks the data type and minimum payload of the current record. */
     private void check(GdsRecordType type, int minBytes) throws GdsFormatException {
-        if (in.dataType() != type.dataType().code()) {
-            throw in.error(type + " record has data type " + in.dataType() + ", expected " + type.dataType().code()
-                    + " (" + type.dataType() + ")");
-        }
-        if (in.length() < minBytes) {
-            throw in.error(type + " record has " + in.length() + " data bytes, expected at least " + minBytes);
-        }
+        records.check(type, minBytes);
     }
 
-    /** Skips a record the model does not hold; fails for a modelled record in the wrong place. */
     private void skipOrFail(String where) throws GdsFormatException {
-        GdsRecordType t = GdsRecordType.ofCode(in.type());
-        if (t != null && t.isModelled()) {
-            throw in.error(t + " record " + where);
-        }
-        count(GdsRecordType.nameOf(in.type()));
-    }
-
-    private void misplaced(GdsRecordType t, String kindName) {
-        count(t + " in " + kindName);
+        records.skipOrFail(where);
     }
 
     private void count(String what) {

@@ -25,6 +25,7 @@ import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.atomic.AtomicBoolean;
 
+import org.apertura.layout.gds.GdsElementRecords;
 import org.apertura.layout.gds.GdsFormatException;
 import org.apertura.layout.gds.GdsReadChecks;
 import org.apertura.layout.gds.GdsReader;
@@ -64,7 +65,6 @@ public final class GdsStreamReader {
     public static final long DEFAULT_WINDOW = 1L << 30;
     /** Smallest window: the largest record (65,535 bytes) must fit. */
     public static final long MIN_WINDOW = 1L << 16;
-    private static final int NO_LAYER = Integer.MIN_VALUE;
     /** ENDSTR (4 bytes, no data) and BGNSTR of 28 bytes with 16-bit integers: a likely structure start. */
     private static final int ENDSTR_HEADER = 0x0004_0700;
     private static final int BGNSTR_HEADER = 0x001C_0502;
@@ -138,6 +138,7 @@ public final class GdsStreamReader {
     private double[] refTransforms = new double[2 * 64];
     private int refCount;
     private int[] scratchXy = new int[16];
+    private final ElementRecords records = new ElementRecords();
 
     private GdsStreamReader(String file, FileChannel channel, ByteBuffer whole, long fileSize, long window,
             long[] partStarts, int part) {
@@ -773,14 +774,14 @@ public final class GdsStreamReader {
         textCount = 0;
         refCount = 0;
         int id = -1;
-        int records = 0;
+        int plainRuns = 0;
         while (true) {
             if (!next()) {
                 throw error("file ends inside structure " + (id < 0 ? "(unnamed)" : "'" + names.name(id) + "'"));
             }
             int type = recordType;
             if ((type == 0x08 || type == 0x09 || type == 0x0C) && id >= 0 && plainElements()) {
-                if ((++records & 0x3FF) == 0) {
+                if ((++plainRuns & 0x3FF) == 0) {
                     checkCancelled();
                 }
             } else if (type == 0x06) { // STRNAME
@@ -809,7 +810,7 @@ public final class GdsStreamReader {
                 if (id < 0) {
                     throw error(GdsRecordType.nameOf(type) + " element in a structure without STRNAME");
                 }
-                readElement(id, type);
+                readElement(id);
             } else {
                 skipOrFail("outside an element in structure " + (id < 0 ? "(unnamed)" : "'" + names.name(id) + "'"));
             }
@@ -827,253 +828,125 @@ public final class GdsStreamReader {
     }
 
     /**
-     * Reads one element. Boundary, box and path coordinates go straight into {@link #data} after a
-     * reserved header, committed only at ENDEL; reference and text points go to a scratch array.
+     * An element's records through this reader: boundary, box and path coordinates go straight into
+     * {@link #data} after a reserved header, committed only at ENDEL; reference and text points go
+     * to a scratch array; an SNAME becomes a name id; STRING and PROPVALUE are checked, not kept.
      */
-    private void readElement(int owner, int kind) throws IOException {
-        long start = recordOffset;
-        check(GdsRecordType.ofCode(kind), 0);
-        boolean modelled = kind != 0x15 && kind != 0x14;
-        if (!modelled) {
-            count(GdsRecordType.nameOf(kind) + " element");
+    private final class ElementRecords extends GdsElementRecords {
+        int snameId;
+
+        @Override
+        protected boolean next() throws IOException {
+            return GdsStreamReader.this.next();
         }
-        boolean shape = kind == 0x08 || kind == 0x09 || kind == 0x2D;
-        int header = kind == 0x09 ? 6 : 2;
-        int layer = NO_LAYER;
-        int datatype = 0;
-        int pathType = 0;
-        int width = 0;
-        int bgnExtn = 0;
-        int endExtn = 0;
-        int xyValues = -1;
-        int snameId = -1;
-        long snameOffset = -1;
-        int columns = 0;
-        int rows = 0;
-        boolean colrow = false;
-        int strans = 0;
-        double mag = 1.0;
-        double angle = 0.0;
-        boolean string = false;
-        boolean pendingAttr = false;
-        while (true) {
-            if (!next()) {
-                throw error("file ends inside " + GdsRecordType.nameOf(kind) + " element started at byte " + start);
-            }
-            int type = recordType;
-            if (type == 0x11) { // ENDEL
-                break;
-            }
-            if (!modelled) {
-                if (GdsRecordType.isElementStart(type) || type == 0x07 || type == 0x04 || type == 0x05) {
-                    throw error(GdsRecordType.nameOf(type) + " before ENDEL of the " + GdsRecordType.nameOf(kind)
-                            + " element started at byte " + start);
-                }
-                continue;
-            }
-            switch (type) {
-                case 0x0D -> { // LAYER
-                    check(GdsRecordType.LAYER, 2);
-                    layer = int16(0);
-                }
-                case 0x0E, 0x16, 0x2E -> { // DATATYPE, TEXTTYPE, BOXTYPE
-                    GdsRecordType t = GdsRecordType.ofCode(type);
-                    if (t != GdsRecordType.typeRecordOf(kind)) {
-                        misplaced(t, kind);
-                    } else {
-                        check(t, 2);
-                        datatype = int16(0);
-                    }
-                }
-                case 0x10 -> { // XY
-                    check(GdsRecordType.XY, 0);
-                    int len = payloadLength;
-                    if (len % 8 != 0) {
-                        throw error("XY record has " + len + " data bytes, not a multiple of 8 (record length "
-                                + (len + 4) + ")");
-                    }
-                    xyValues = len >> 2;
-                    copyXy(shape, header, xyValues);
-                }
-                case 0x21 -> { // PATHTYPE
-                    if (kind != 0x09 && kind != 0x0C) {
-                        misplaced(GdsRecordType.PATHTYPE, kind);
-                    } else {
-                        check(GdsRecordType.PATHTYPE, 2);
-                        pathType = int16(0);
-                        if (pathType != 0 && pathType != 1 && pathType != 2 && pathType != 4) {
-                            throw error("PATHTYPE " + pathType + " is undefined (0, 1, 2 or 4)");
-                        }
-                    }
-                }
-                case 0x0F -> { // WIDTH
-                    if (kind != 0x09 && kind != 0x0C) {
-                        misplaced(GdsRecordType.WIDTH, kind);
-                    } else {
-                        check(GdsRecordType.WIDTH, 4);
-                        width = int32(0);
-                    }
-                }
-                case 0x30, 0x31 -> { // BGNEXTN, ENDEXTN
-                    GdsRecordType t = GdsRecordType.ofCode(type);
-                    if (kind != 0x09) {
-                        misplaced(t, kind);
-                    } else {
-                        check(t, 4);
-                        if (type == 0x30) {
-                            bgnExtn = int32(0);
-                        } else {
-                            endExtn = int32(0);
-                        }
-                    }
-                }
-                case 0x12 -> { // SNAME
-                    if (kind != 0x0A && kind != 0x0B) {
-                        misplaced(GdsRecordType.SNAME, kind);
-                    } else {
-                        check(GdsRecordType.SNAME, 1);
-                        int n = stringLength();
-                        int found = names.find(buf, payloadStart, n);
-                        snameId = found >= 0 ? found : names.add(buf, payloadStart, n);
-                        snameOffset = recordOffset;
-                    }
-                }
-                case 0x13 -> { // COLROW
-                    if (kind != 0x0B) {
-                        misplaced(GdsRecordType.COLROW, kind);
-                    } else {
-                        check(GdsRecordType.COLROW, 4);
-                        columns = int16(0);
-                        rows = int16(1);
-                        colrow = true;
-                        if (columns < 1 || rows < 1) {
-                            throw error("AREF with " + columns + " columns and " + rows + " rows (each must be 1 to 32767)");
-                        }
-                    }
-                }
-                case 0x1A -> { // STRANS
-                    if (kind != 0x0A && kind != 0x0B && kind != 0x0C) {
-                        misplaced(GdsRecordType.STRANS, kind);
-                    } else {
-                        check(GdsRecordType.STRANS, 2);
-                        strans = int16(0) & 0xFFFF;
-                    }
-                }
-                case 0x1B, 0x1C -> { // MAG, ANGLE
-                    GdsRecordType t = GdsRecordType.ofCode(type);
-                    if (kind != 0x0A && kind != 0x0B && kind != 0x0C) {
-                        misplaced(t, kind);
-                    } else {
-                        check(t, 8);
-                        double v = real8(0);
-                        if (type == 0x1B) {
-                            if (!(v > 0)) {
-                                throw error("MAG " + v + " is not positive");
-                            }
-                            mag = v;
-                        } else {
-                            angle = v;
-                        }
-                    }
-                }
-                case 0x17 -> { // PRESENTATION
-                    if (kind != 0x0C) {
-                        misplaced(GdsRecordType.PRESENTATION, kind);
-                    } else {
-                        check(GdsRecordType.PRESENTATION, 2);
-                        int presentation = int16(0) & 0xFFFF;
-                        if (((presentation >> 2) & 3) == 3 || (presentation & 3) == 3) {
-                            throw error("PRESENTATION justification value 3 is undefined");
-                        }
-                    }
-                }
-                case 0x19 -> { // STRING
-                    if (kind != 0x0C) {
-                        misplaced(GdsRecordType.STRING, kind);
-                    } else {
-                        check(GdsRecordType.STRING, 0);
-                        string = true;
-                    }
-                }
-                case 0x2B -> { // PROPATTR
-                    check(GdsRecordType.PROPATTR, 2);
-                    pendingAttr = true;
-                }
-                case 0x2C -> { // PROPVALUE
-                    check(GdsRecordType.PROPVALUE, 0);
-                    if (!pendingAttr) {
-                        throw error("PROPVALUE without a preceding PROPATTR");
-                    }
-                    pendingAttr = false;
-                }
-                default -> {
-                    if (GdsRecordType.isElementStart(type) || type == 0x07 || type == 0x04 || type == 0x05 || type == 0x06) {
-                        throw error(GdsRecordType.nameOf(type) + " before ENDEL of the " + GdsRecordType.nameOf(kind)
-                                + " element started at byte " + start);
-                    }
-                    skipOrFail("inside a " + GdsRecordType.nameOf(kind) + " element");
-                }
-            }
+
+        @Override
+        protected int recordType() {
+            return recordType;
         }
-        if (!modelled) {
+
+        @Override
+        protected int recordDataType() {
+            return dataType;
+        }
+
+        @Override
+        protected int payloadLength() {
+            return payloadLength;
+        }
+
+        @Override
+        protected long recordOffset() {
+            return recordOffset;
+        }
+
+        @Override
+        protected int int16(int index) {
+            return GdsStreamReader.this.int16(index);
+        }
+
+        @Override
+        protected int int32(int index) {
+            return GdsStreamReader.this.int32(index);
+        }
+
+        @Override
+        protected double real8(int index) {
+            return GdsStreamReader.this.real8(index);
+        }
+
+        @Override
+        protected String file() {
+            return file;
+        }
+
+        @Override
+        protected void count(String what) {
+            GdsStreamReader.this.count(what);
+        }
+
+        @Override
+        protected void xy(int values) {
+            int k = kind();
+            copyXy(k == 0x08 || k == 0x09 || k == 0x2D, k == 0x09 ? 6 : 2, values);
+        }
+
+        @Override
+        protected void sname() {
+            int n = stringLength();
+            int found = names.find(buf, payloadStart, n);
+            snameId = found >= 0 ? found : names.add(buf, payloadStart, n);
+        }
+
+        @Override
+        protected void string() {
+            // checked, not kept
+        }
+
+        @Override
+        protected void propertyValue(int attributeNumber) {
+            // checked, not kept
+        }
+    }
+
+    /** Reads the element at the current record into {@link #data} (shapes) or {@link #refs} (references). */
+    private void readElement(int owner) throws IOException {
+        ElementRecords r = records;
+        if (!r.read()) {
             return;
         }
-        String kindName = GdsRecordType.nameOf(kind);
-        if (pendingAttr) {
-            throw new GdsFormatException(file, start, kindName + " element has a PROPATTR without PROPVALUE");
-        }
-        if (xyValues < 0) {
-            throw new GdsFormatException(file, start, kindName + " element without XY");
-        }
-        int points = xyValues / 2;
+        int kind = r.kind();
+        int points = r.xyValues() / 2;
         switch (kind) {
             case 0x08, 0x09, 0x2D -> {
-                requireLayer(layer, start, kindName);
-                if (kind == 0x2D) {
-                    requirePoints(points == 5, start, kindName, points, "5");
-                } else {
-                    requirePoints(points >= 1, start, kindName, points, "at least 1");
-                }
                 int at = dataLength;
                 int k = kind == 0x08 ? StreamCell.BOUNDARY : kind == 0x2D ? StreamCell.BOX : StreamCell.PATH;
                 data[at] = k << 28 | points;
-                data[at + 1] = layer << 16 | (datatype & 0xFFFF);
+                data[at + 1] = r.layer() << 16 | (r.datatype() & 0xFFFF);
                 if (k == StreamCell.PATH) {
-                    data[at + 2] = pathType;
-                    data[at + 3] = width;
-                    data[at + 4] = bgnExtn;
-                    data[at + 5] = endExtn;
+                    data[at + 2] = r.pathType();
+                    data[at + 3] = r.width();
+                    data[at + 4] = r.beginExtension();
+                    data[at + 5] = r.endExtension();
                 }
-                dataLength = at + header + xyValues;
+                dataLength = at + StreamCell.headerSize(k) + r.xyValues();
                 if (k == StreamCell.BOUNDARY && points == 5) {
                     dataLength = StreamCell.packRectangle(data, at);
                 }
                 shapeCount++;
             }
-            case 0x0C -> {
-                requireLayer(layer, start, kindName);
-                requirePoints(points == 1, start, kindName, points, "1");
-                if (!string) {
-                    throw new GdsFormatException(file, start, "TEXT element without STRING");
-                }
-                textCount++;
-            }
+            case 0x0C -> textCount++;
             case 0x0A, 0x0B -> {
-                GdsReadChecks.requireName(file, snameId >= 0, start, kindName);
                 int[] xy = scratchXy;
+                int columns = 1;
+                int rows = 1;
                 int columnPitchX = 0;
                 int columnPitchY = 0;
                 int rowPitchX = 0;
                 int rowPitchY = 0;
-                if (kind == 0x0A) {
-                    requirePoints(points == 1, start, kindName, points, "1");
-                    columns = 1;
-                    rows = 1;
-                } else {
-                    if (!colrow) {
-                        throw new GdsFormatException(file, start, "AREF element without COLROW");
-                    }
-                    requirePoints(points == 3, start, kindName, points, "3");
+                if (kind == 0x0B) {
+                    columns = r.columns();
+                    rows = r.rows();
                     columnPitchX = pitch((long) xy[2] - xy[0], columns);
                     columnPitchY = pitch((long) xy[3] - xy[1], columns);
                     rowPitchX = pitch((long) xy[4] - xy[0], rows);
@@ -1083,26 +956,27 @@ public final class GdsStreamReader {
                     refs = Arrays.copyOf(refs, refs.length * 2);
                     refTransforms = Arrays.copyOf(refTransforms, refTransforms.length * 2);
                 }
-                int r = refCount * StreamCell.REF_STRIDE;
-                refs[r] = snameId; // a name id until resolved
-                refs[r + 1] = xy[0];
-                refs[r + 2] = xy[1];
-                refs[r + 3] = ((strans & 0x8000) != 0 ? StreamCell.REFLECTED : 0)
+                int i = refCount * StreamCell.REF_STRIDE;
+                int strans = r.strans();
+                refs[i] = r.snameId; // a name id until resolved
+                refs[i + 1] = xy[0];
+                refs[i + 2] = xy[1];
+                refs[i + 3] = ((strans & 0x8000) != 0 ? StreamCell.REFLECTED : 0)
                         | ((strans & 0x0004) != 0 ? StreamCell.ABSOLUTE_MAG : 0)
                         | ((strans & 0x0002) != 0 ? StreamCell.ABSOLUTE_ANGLE : 0)
                         | (kind == 0x0B ? StreamCell.ARRAY : 0);
-                refs[r + 4] = columns;
-                refs[r + 5] = rows;
-                refs[r + 6] = columnPitchX;
-                refs[r + 7] = columnPitchY;
-                refs[r + 8] = rowPitchX;
-                refs[r + 9] = rowPitchY;
-                refTransforms[2 * refCount] = mag;
-                refTransforms[2 * refCount + 1] = angle;
+                refs[i + 4] = columns;
+                refs[i + 5] = rows;
+                refs[i + 6] = columnPitchX;
+                refs[i + 7] = columnPitchY;
+                refs[i + 8] = rowPitchX;
+                refs[i + 9] = rowPitchY;
+                refTransforms[2 * refCount] = r.magnification();
+                refTransforms[2 * refCount + 1] = r.angle();
                 refCount++;
-                names.referenced(snameId, snameOffset, owner);
+                names.referenced(r.snameId, r.snameOffset(), owner);
             }
-            default -> throw new IllegalStateException("element kind " + kindName);
+            default -> throw new IllegalStateException("element kind " + kind);
         }
     }
 
@@ -1430,15 +1304,6 @@ public final class GdsStreamReader {
         return GdsReadChecks.pitch(span, count);
     }
 
-    private void requireLayer(int layer, long start, String kind) throws GdsFormatException {
-        GdsReadChecks.requireLayer(file, layer, start, kind);
-    }
-
-    private void requirePoints(boolean ok, long start, String kind, int points, String expected)
-            throws GdsFormatException {
-        GdsReadChecks.requirePoints(file, ok, start, kind, points, expected);
-    }
-
     /**
      * A cycle, as GdsReader finds it: depth-first from each cell in file order over the children in
      * reference order (repeats of the previous child dropped); the cycle as cells A, B, ..., A.
@@ -1507,25 +1372,11 @@ public final class GdsStreamReader {
     }
 
     private void check(GdsRecordType type, int minBytes) throws GdsFormatException {
-        if (dataType != type.dataType().code()) {
-            throw error(type + " record has data type " + dataType + ", expected " + type.dataType().code() + " ("
-                    + type.dataType() + ")");
-        }
-        if (payloadLength < minBytes) {
-            throw error(type + " record has " + payloadLength + " data bytes, expected at least " + minBytes);
-        }
+        records.check(type, minBytes);
     }
 
     private void skipOrFail(String where) throws GdsFormatException {
-        GdsRecordType t = GdsRecordType.ofCode(recordType);
-        if (t != null && t.isModelled()) {
-            throw error(t + " record " + where);
-        }
-        count(GdsRecordType.nameOf(recordType));
-    }
-
-    private void misplaced(GdsRecordType t, int kind) {
-        count(t + " in " + GdsRecordType.nameOf(kind));
+        records.skipOrFail(where);
     }
 
     private void count(String what) {
