@@ -696,7 +696,7 @@ public final class GdsStreamReader {
     }
 
     private GdsFormatException error(String problem) {
-        return new GdsFormatException(file, recordOffset, problem);
+        return records.error(problem);
     }
 
     // ---- library and structures, following GdsReader step by step ----
@@ -1109,28 +1109,10 @@ public final class GdsStreamReader {
             }
             int to = length + header;
             int from = q + 4;
-            if (values == 10) { // five points: a path, or a boundary that is not a rectangle
-                long xy0 = b.getLong(from);
-                long xy1 = b.getLong(from + 8);
-                long xy2 = b.getLong(from + 16);
-                long xy3 = b.getLong(from + 24);
-                long xy4 = b.getLong(from + 32);
-                d[to] = (int) (xy0 >> 32);
-                d[to + 1] = (int) xy0;
-                d[to + 2] = (int) (xy1 >> 32);
-                d[to + 3] = (int) xy1;
-                d[to + 4] = (int) (xy2 >> 32);
-                d[to + 5] = (int) xy2;
-                d[to + 6] = (int) (xy3 >> 32);
-                d[to + 7] = (int) xy3;
-                d[to + 8] = (int) (xy4 >> 32);
-                d[to + 9] = (int) xy4;
-            } else {
-                for (int i = 0; i < values; i += 2) {
-                    long xy = b.getLong(from + 4 * i);
-                    d[to + i] = (int) (xy >> 32);
-                    d[to + i + 1] = (int) xy;
-                }
+            for (int i = 0; i < values; i += 2) {
+                long xy = b.getLong(from + 4 * i);
+                d[to + i] = (int) (xy >> 32);
+                d[to + i + 1] = (int) xy;
             }
             length = to + values;
             shapes++;
